@@ -1,0 +1,28 @@
+import { existsSync, readdirSync, statSync } from 'node:fs';
+import { join } from 'node:path';
+import { run } from './ensure-install.mjs';
+
+const INPUTS = ['src', 'public', 'content', 'astro.config.mjs', 'package-lock.json', 'tsconfig.json'];
+const OUTPUT = 'dist/server/entry.mjs';
+
+function newestMtime(path) {
+  if (!existsSync(path)) return 0;
+  const stat = statSync(path);
+  if (!stat.isDirectory()) return stat.mtimeMs;
+  let newest = stat.mtimeMs;
+  for (const entry of readdirSync(path)) newest = Math.max(newest, newestMtime(join(path, entry)));
+  return newest;
+}
+
+/** Builds when dist/ is missing or older than any source file; a fresh build is reused. */
+export function buildIfStale() {
+  const built = existsSync(OUTPUT) ? statSync(OUTPUT).mtimeMs : 0;
+  const sources = Math.max(...INPUTS.map(newestMtime));
+  if (built > sources) return false;
+  console.log('→ building (astro build)…');
+  // Configuration comes from the environment at run time only; nothing secret is built in.
+  const env = { ...process.env, ASTRO_TELEMETRY_DISABLED: '1' };
+  delete env.AUTH_SECRET;
+  run(process.execPath, ['node_modules/astro/astro.js', 'build'], { env });
+  return true;
+}

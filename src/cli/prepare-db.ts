@@ -1,0 +1,30 @@
+/**
+ * Migrates the database and, on an empty one with SEED_DEMO=1, seeds the demo venues.
+ * Run by `npm start` before the server starts, and by the test setup for its template database.
+ */
+import { openDb } from '../db/client';
+import { runMigrations } from '../db/migrate';
+import { ConfigError, getConfig } from '../server/config';
+
+async function main() {
+  const config = getConfig();
+  const db = await openDb(config.DATABASE_URL);
+  await runMigrations(db);
+  if (!config.SEED_DEMO) {
+    db.$client.close();
+    return;
+  }
+  const { seedDemo } = await import('../db/seed');
+  const result = await seedDemo(db, config.DEMO_PASSWORD);
+  if (result.seeded) {
+    console.log('Seeded the demo venues. Demo accounts (demo only — never use these on a real instance):');
+    for (const a of result.accounts) console.log(`  ${a.email.padEnd(26)} ${a.role}`);
+    console.log(`  password: the DEMO_PASSWORD setting${process.env.DEMO_PASSWORD ? '' : ' (default "throwline-demo")'}`);
+  }
+  db.$client.close();
+}
+
+main().catch((err) => {
+  console.error(err instanceof ConfigError ? err.message : err);
+  process.exit(1);
+});

@@ -1,0 +1,21 @@
+// `npm test`: install what is missing (npm packages, and Debian's chromium for the browser
+// tests), then run every test: unit, integration against a real server, end to end in Chromium.
+import { existsSync } from 'node:fs';
+import { ensureInstalled, run } from './ensure-install.mjs';
+
+process.env.ASTRO_TELEMETRY_DISABLED = '1';
+ensureInstalled();
+
+const CHROMIUM = '/usr/bin/chromium';
+if (!existsSync(CHROMIUM)) {
+  if (process.getuid?.() === 0) {
+    console.log('→ installing Debian chromium for the browser tests…');
+    run('apt-get', ['update', '-qq']);
+    run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', 'chromium'], { env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+  } else {
+    console.error(`✗ ${CHROMIUM} is missing. Install it (sudo apt-get install chromium) and run npm test again.`);
+    process.exit(1);
+  }
+}
+
+run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--config', 'tests/vitest.config.ts', ...process.argv.slice(2)]);

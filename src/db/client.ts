@@ -1,0 +1,24 @@
+import { mkdirSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { createClient, type Client } from '@libsql/client';
+import { drizzle, type LibSQLDatabase } from 'drizzle-orm/libsql';
+import * as schema from './schema';
+
+export type Db = LibSQLDatabase<typeof schema> & { $client: Client };
+
+/**
+ * Opens the database with the settings the rest of the code relies on: WAL so readers never wait
+ * for the writer, foreign keys enforced, and synchronous=FULL so a committed revision survives a
+ * power cut at the desk. One connection: pragmas are per connection, and writes are serialised
+ * by the write queue anyway.
+ */
+export async function openDb(url: string): Promise<Db> {
+  if (url.startsWith('file:')) mkdirSync(dirname(resolve(url.slice('file:'.length))), { recursive: true });
+  const client = createClient({ url, concurrency: 1, timeout: 5000 });
+  if (url.startsWith('file:')) {
+    await client.execute('PRAGMA journal_mode = WAL');
+    await client.execute('PRAGMA synchronous = FULL');
+  }
+  await client.execute('PRAGMA foreign_keys = ON');
+  return drizzle(client, { schema }) as Db;
+}

@@ -1,0 +1,5 @@
+export * from './users';
+export * from './venues';
+export * from './pages';
+export * from './files';
+export * from './audit';

@@ -1,0 +1,47 @@
+import { index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { createdAt, id } from './columns';
+import { users } from './users';
+import { sections, venues } from './venues';
+
+export const pages = sqliteTable(
+  'pages',
+  {
+    id: id(),
+    venueId: text('venue_id')
+      .notNull()
+      .references(() => venues.id, { onDelete: 'cascade' }),
+    sectionId: text('section_id')
+      .notNull()
+      .references(() => sections.id),
+    slug: text('slug').notNull(),
+    title: text('title').notNull(),
+    inAdvance: integer('in_advance', { mode: 'boolean' }).notNull().default(false),
+    /** Number of the revision readers see; the compare-and-set on save checks this column. */
+    currentRevision: integer('current_revision').notNull().default(0),
+    createdAt: createdAt(),
+    updatedAt: integer('updated_at', { mode: 'timestamp_ms' })
+      .notNull()
+      .$defaultFn(() => new Date()),
+  },
+  (t) => [uniqueIndex('pages_venue_slug_idx').on(t.venueId, t.slug), index('pages_section_idx').on(t.sectionId)],
+);
+
+export const revisions = sqliteTable(
+  'revisions',
+  {
+    id: id(),
+    pageId: text('page_id')
+      .notNull()
+      .references(() => pages.id, { onDelete: 'cascade' }),
+    number: integer('number').notNull(),
+    /** The ProseMirror document as JSON text, as the server validated it. */
+    doc: text('doc').notNull(),
+    plainText: text('plain_text').notNull(),
+    summary: text('summary').notNull().default(''),
+    authorId: text('author_id').references(() => users.id, { onDelete: 'set null' }),
+    /** Set when this revision was made by restoring an older one. */
+    restoredFrom: integer('restored_from'),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('revisions_page_number_idx').on(t.pageId, t.number)],
+);

@@ -1,0 +1,43 @@
+import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { createdAt, id } from './columns';
+import { users } from './users';
+
+export const venues = sqliteTable('venues', {
+  id: id(),
+  slug: text('slug').notNull().unique(),
+  name: text('name').notNull(),
+  town: text('town'),
+  createdAt: createdAt(),
+});
+
+export const ROLES = ['manager', 'engineer', 'viewer'] as const;
+
+export const memberships = sqliteTable(
+  'memberships',
+  {
+    venueId: text('venue_id')
+      .notNull()
+      .references(() => venues.id, { onDelete: 'cascade' }),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    role: text('role', { enum: ROLES }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.venueId, t.userId] }), index('memberships_user_idx').on(t.userId)],
+);
+
+/** A venue's own list of sections; pages hang off one of them, in the order of `position`. */
+export const sections = sqliteTable(
+  'sections',
+  {
+    id: id(),
+    venueId: text('venue_id')
+      .notNull()
+      .references(() => venues.id, { onDelete: 'cascade' }),
+    slug: text('slug').notNull(),
+    title: text('title').notNull(),
+    position: integer('position').notNull().default(0),
+  },
+  (t) => [uniqueIndex('sections_venue_slug_idx').on(t.venueId, t.slug)],
+);

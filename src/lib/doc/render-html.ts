@@ -1,0 +1,159 @@
+import { escapeHtml } from './escape-html';
+import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
+import type { PmMark, PmNode } from './types';
+
+/**
+ * Renders a stored page document to HTML for the read view, on the server, with no editor code.
+ * Only known node and mark types produce markup; every text and attribute is escaped, and links
+ * and images are checked again here even though the save route already vetted them, so a row
+ * written by an older version can never put script on a page.
+ */
+export type BlockRenderer = (node: PmNode) => string;
+
+export interface RenderOptions {
+  /** Renderers for custom block nodes (processor blocks), keyed by node type. */
+  blocks?: Record<string, BlockRenderer>;
+}
+
+const SIMPLE_BLOCKS: Record<string, string> = {
+  paragraph: 'p',
+  blockquote: 'blockquote',
+  bulletList: 'ul',
+  listItem: 'li',
+  tableRow: 'tr',
+};
+
+function attr(name: string, value: string | number): string {
+  return ` ${name}="${escapeHtml(String(value))}"`;
+}
+
+function clampInt(value: unknown, min: number, max: number, fallback: number): number {
+  const n = Number(value);
+  return Number.isInteger(n) && n >= min && n <= max ? n : fallback;
+}
+
+function renderMarks(text: string, marks: PmMark[] | undefined): string {
+  let html = escapeHtml(text);
+  for (const mark of marks ?? []) {
+    switch (mark.type) {
+      case 'bold':
+        html = `<strong>${html}</strong>`;
+        break;
+      case 'italic':
+        html = `<em>${html}</em>`;
+        break;
+      case 'strike':
+        html = `<s>${html}</s>`;
+        break;
+      case 'underline':
+        html = `<u>${html}</u>`;
+        break;
+      case 'code':
+        html = `<code>${html}</code>`;
+        break;
+      case 'link': {
+        const href = mark.attrs?.href;
+        if (isSafeLinkHref(href)) {
+          const external = /^https?:/i.test(href);
+          html = `<a${attr('href', href)}${external ? ' rel="noopener noreferrer nofollow" target="_blank"' : ''}>${html}</a>`;
+        }
+        break;
+      }
+      default:
+        break;
+    }
+  }
+  return html;
+}
+
+export function renderDocHtml(doc: PmNode, options: RenderOptions = {}): string {
+  const out: string[] = [];
+  // Iterative, so a deeply nested stored document cannot overflow the stack.
+  const stack: (PmNode | { close: string })[] = [doc];
+  while (stack.length) {
+    const item = stack.pop()!;
+    if ('close' in item) {
+      out.push(item.close);
+      continue;
+    }
+    const [open, close] = tagsFor(item, options);
+    out.push(open);
+    stack.push({ close });
+    if (open.endsWith('/>') || item.type === 'text' || options.blocks?.[item.type]) continue;
+    const children = item.content ?? [];
+    for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]);
+  }
+  return out.join('');
+}
+
+function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
+  const custom = options.blocks?.[node.type];
+  if (custom) return [custom(node), ''];
+  const simple = SIMPLE_BLOCKS[node.type];
+  if (simple) return [`<${simple}>`, `</${simple}>`];
+  switch (node.type) {
+    case 'doc':
+      return ['', ''];
+    case 'text':
+      return [renderMarks(node.text ?? '', node.marks), ''];
+    case 'heading': {
+      const level = clampInt(node.attrs?.level, 1, 4, 2);
+      return [`<h${level}>`, `</h${level}>`];
+    }
+    case 'orderedList': {
+      const start = clampInt(node.attrs?.start, 1, 100000, 1);
+      return [start === 1 ? '<ol>' : `<ol${attr('start', start)}>`, '</ol>'];
+    }
+    case 'taskList':
+      return ['<ul data-type="taskList">', '</ul>'];
+    case 'taskItem': {
+      const checked = node.attrs?.checked === true;
+      return [`<li data-checked="${checked}"><span aria-hidden="true">${checked ? '☑' : '☐'}</span> `, '</li>'];
+    }
+    case 'codeBlock':
+      return ['<pre><code>', '</code></pre>'];
+    case 'horizontalRule':
+      return ['<hr/>', ''];
+    case 'hardBreak':
+      return ['<br/>', ''];
+    case 'table':
+      return ['<div class="table-wrap"><table><tbody>', '</tbody></table></div>'];
+    case 'tableHeader':
+    case 'tableCell': {
+      const tag = node.type === 'tableHeader' ? 'th' : 'td';
+      const colspan = clampInt(node.attrs?.colspan, 1, 50, 1);
+      const rowspan = clampInt(node.attrs?.rowspan, 1, 500, 1);
+      return [`<${tag}${colspan > 1 ? attr('colspan', colspan) : ''}${rowspan > 1 ? attr('rowspan', rowspan) : ''}>`, `</${tag}>`];
+    }
+    case 'image': {
+      const src = node.attrs?.src;
+      if (!isOwnFileUrl(src)) return ['', ''];
+      const alt = typeof node.attrs?.alt === 'string' ? node.attrs.alt : '';
+      const title = typeof node.attrs?.title === 'string' ? node.attrs.title : '';
+      return [`<img${attr('src', src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
+    }
+    default:
+      // Unknown nodes keep their text but lose their markup.
+      return ['', ''];
+  }
+}
+
+/** The document's words, for search and for the word-level diff. */
+export function docPlainText(doc: PmNode): string {
+  const parts: string[] = [];
+  const stack: PmNode[] = [doc];
+  const BLOCK_BREAK = new Set(['paragraph', 'heading', 'listItem', 'taskItem', 'tableRow', 'codeBlock', 'blockquote']);
+  while (stack.length) {
+    const node = stack.pop()!;
+    if (node.type === 'text') {
+      parts.push(node.text ?? '');
+      continue;
+    }
+    if (node.type === 'hardBreak') parts.push('\n');
+    if (node.type === 'tableCell' || node.type === 'tableHeader') parts.push(' ');
+    if (BLOCK_BREAK.has(node.type)) parts.push('\n');
+    const children = node.content ?? [];
+    for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]);
+  }
+  return parts.join('').replace(/[ \t]+/g, ' ').replace(/\n\s*\n+/g, '\n').trim();
+}

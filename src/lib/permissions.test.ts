@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest';
+import { can, type Action, type Role } from './permissions';
+
+// The expected matrix is DESIGN.md's roles table, written out independently of the implementation.
+const table: Record<Action, Record<'admin' | Role | 'none', boolean>> = {
+  'venue.read': { admin: true, manager: true, engineer: true, viewer: true, none: false },
+  'advance.read': { admin: true, manager: true, engineer: true, viewer: true, none: false },
+  'page.edit': { admin: true, manager: true, engineer: true, viewer: false, none: false },
+  'file.upload': { admin: true, manager: true, engineer: true, viewer: false, none: false },
+  'file.delete': { admin: true, manager: true, engineer: true, viewer: false, none: false },
+  'members.manage': { admin: true, manager: true, engineer: false, viewer: false, none: false },
+  'audit.read': { admin: true, manager: true, engineer: false, viewer: false, none: false },
+  'venue.create': { admin: true, manager: false, engineer: false, viewer: false, none: false },
+  'admin.manage': { admin: true, manager: false, engineer: false, viewer: false, none: false },
+};
+
+describe('can()', () => {
+  for (const [action, row] of Object.entries(table) as [Action, (typeof table)[Action]][]) {
+    for (const [who, expected] of Object.entries(row)) {
+      it(`${who} ${expected ? 'may' : 'may not'} ${action}`, () => {
+        const actor = { id: 'u1', isAdmin: who === 'admin' };
+        const role = who === 'admin' || who === 'none' ? null : (who as Role);
+        expect(can(actor, action, { role })).toBe(expected);
+      });
+    }
+  }
+
+  it('refuses everything to a signed-out visitor', () => {
+    expect(can(null, 'venue.read', { role: 'manager' })).toBe(false);
+  });
+
+  it('does not let a role in one venue stand for another (no venue access given)', () => {
+    expect(can({ id: 'u1', isAdmin: false }, 'venue.read', null)).toBe(false);
+  });
+});

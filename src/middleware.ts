@@ -1,0 +1,38 @@
+import { defineMiddleware } from 'astro:middleware';
+import { readSessionUser } from './server/session';
+import { securityHeaders } from './server/security-headers';
+
+/** Paths that never depend on who is asking; reading the session there is wasted work. */
+function isAnonymousPath(pathname: string): boolean {
+  return (
+    pathname.startsWith('/_astro/') ||
+    pathname.startsWith('/api/calc/') ||
+    pathname.startsWith('/api/auth/') ||
+    pathname === '/sw.js' ||
+    pathname === '/manifest.webmanifest' ||
+    pathname === '/favicon.svg'
+  );
+}
+
+/**
+ * Fills `locals.user` once per request and adds the security headers. It authorises nothing:
+ * every page and route checks permissions itself, through src/server/guard.ts.
+ */
+export const onRequest = defineMiddleware(async (context, next) => {
+  context.locals.user = null;
+  if (!isAnonymousPath(context.url.pathname) && !context.isPrerendered) {
+    context.locals.user = await readSessionUser(context.request);
+  }
+  const response = await next();
+  try {
+    for (const [name, value] of Object.entries(securityHeaders)) {
+      if (!response.headers.has(name)) response.headers.set(name, value);
+    }
+    return response;
+  } catch {
+    // Some responses (Response.redirect) have immutable headers; copy them once.
+    const copy = new Response(response.body, response);
+    for (const [name, value] of Object.entries(securityHeaders)) if (!copy.headers.has(name)) copy.headers.set(name, value);
+    return copy;
+  }
+});

@@ -1,0 +1,21 @@
+import type { APIRoute } from 'astro';
+import { VenueCreateSchema } from '../../../lib/schemas/venue';
+import { requirePermission, requireUser } from '../../../server/guard';
+import { handle, json, parseWith, readJsonBody } from '../../../server/http';
+import { createVenue, listVenuesFor } from '../../../server/venues';
+
+export const GET: APIRoute = ({ locals }) =>
+  handle(async () => {
+    const user = requireUser(locals.user);
+    const venues = await listVenuesFor(user);
+    return json({ venues });
+  });
+
+export const POST: APIRoute = ({ locals, request }) =>
+  handle(async () => {
+    const user = requireUser(locals.user);
+    requirePermission(user, 'venue.create');
+    const input = parseWith(VenueCreateSchema, await readJsonBody(request));
+    const venue = await createVenue(input, user);
+    return json({ venue }, 201);
+  });

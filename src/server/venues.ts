@@ -1,0 +1,75 @@
+import { asc, eq, sql } from 'drizzle-orm';
+import { memberships, pages, sections, venues } from '../db/schema';
+import type { VenueCreate } from '../lib/schemas/venue';
+import { slugify } from '../lib/slug';
+import { recordAudit } from './audit';
+import { getDb, writeTx } from './db';
+import { HttpError } from './http';
+import type { SessionUser } from './session';
+
+export const DEFAULT_SECTIONS: { slug: string; title: string }[] = [
+  { slug: 'pa-system', title: 'PA system' },
+  { slug: 'control', title: 'Control and FOH' },
+  { slug: 'stage', title: 'Stage I/O and patch' },
+  { slug: 'monitors', title: 'Monitors' },
+  { slug: 'power', title: 'Power' },
+  { slug: 'rigging', title: 'Rigging' },
+  { slug: 'logistics', title: 'Logistics and access' },
+  { slug: 'contacts', title: 'Contacts' },
+];
+
+/** Venues this person may read, with their role there (admins see all, role null where not a member). */
+export async function listVenuesFor(user: SessionUser) {
+  const db = await getDb();
+  const rows = await db
+    .select({
+      id: venues.id,
+      slug: venues.slug,
+      name: venues.name,
+      town: venues.town,
+      role: memberships.role,
+      pageCount: sql<number>`(select count(*) from ${pages} where ${pages.venueId} = ${venues.id})`,
+    })
+    .from(venues)
+    .leftJoin(memberships, sql`${memberships.venueId} = ${venues.id} and ${memberships.userId} = ${user.id}`)
+    .orderBy(asc(venues.name));
+  return rows.filter((r) => user.isAdmin || r.role);
+}
+
+export async function createVenue(input: VenueCreate, actor: SessionUser) {
+  const slug = input.slug ?? slugify(input.name);
+  if (!slug) throw new HttpError(400, 'The name gives no usable slug; add a slug of letters and digits.', 'slug');
+  return writeTx(async (tx) => {
+    const taken = await tx.select({ id: venues.id }).from(venues).where(eq(venues.slug, slug)).limit(1);
+    if (taken.length) throw new HttpError(409, `A venue with the slug "${slug}" exists already; choose another slug.`, 'slug');
+    const [venue] = await tx.insert(venues).values({ name: input.name, town: input.town ?? null, slug }).returning();
+    await tx.insert(sections).values(DEFAULT_SECTIONS.map((s, position) => ({ ...s, position, venueId: venue.id })));
+    await recordAudit(tx, { venueId: venue.id, actorId: actor.id, action: 'venue.create', targetType: 'venue', targetId: venue.id, detail: { name: venue.name } });
+    return venue;
+  });
+}
+
+export async function listSections(venueId: string) {
+  const db = await getDb();
+  return db.select().from(sections).where(eq(sections.venueId, venueId)).orderBy(asc(sections.position), asc(sections.title));
+}
+
+/** Pages of a venue with their section, for the venue home and GET /api/venues/:venue/pages. */
+export async function listPages(venueId: string) {
+  const db = await getDb();
+  return db
+    .select({
+      id: pages.id,
+      slug: pages.slug,
+      title: pages.title,
+      section: sections.slug,
+      sectionTitle: sections.title,
+      currentRevision: pages.currentRevision,
+      updatedAt: pages.updatedAt,
+      inAdvance: pages.inAdvance,
+    })
+    .from(pages)
+    .innerJoin(sections, eq(sections.id, pages.sectionId))
+    .where(eq(pages.venueId, venueId))
+    .orderBy(asc(sections.position), asc(pages.title));
+}

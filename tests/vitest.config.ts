@@ -1,0 +1,44 @@
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vitest/config';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+
+export default defineConfig({
+  test: {
+    root,
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          root,
+          include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        test: {
+          name: 'integration',
+          root,
+          include: ['tests/integration/**/*.test.ts'],
+          globalSetup: ['tests/setup/global-setup.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+          // Each file starts its own server; two at a time fits the two cores.
+          maxWorkers: 2,
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          root,
+          include: ['tests/e2e/**/*.test.ts'],
+          globalSetup: ['tests/setup/global-setup.ts'],
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+          maxWorkers: 1,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
