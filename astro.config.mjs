@@ -8,6 +8,8 @@ import auth from 'auth-astro';
 
 export default defineConfig({
   output: 'server',
+  // Lets several working copies of the test suite build side by side (see DEVELOPERS.md).
+  outDir: process.env.THROWLINE_BUILD_DIR ?? './dist',
   adapter: node({ mode: 'standalone' }),
   integrations: [react(), mdx(), auth({ configFile: './src/auth.config.ts', injectEndpoints: false })],
   // The node adapter ignores the Host header unless it matches allowedDomains, and the

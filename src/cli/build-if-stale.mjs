@@ -3,7 +3,8 @@ import { join } from 'node:path';
 import { run } from './ensure-install.mjs';
 
 const INPUTS = ['src', 'public', 'content', 'astro.config.mjs', 'package-lock.json', 'tsconfig.json'];
-const OUTPUT = 'dist/server/entry.mjs';
+export const BUILD_DIR = process.env.THROWLINE_BUILD_DIR ?? 'dist';
+export const SERVER_ENTRY = `${BUILD_DIR}/server/entry.mjs`;
 
 function newestMtime(path) {
   if (!existsSync(path)) return 0;
@@ -16,7 +17,7 @@ function newestMtime(path) {
 
 /** Builds when dist/ is missing or older than any source file; a fresh build is reused. */
 export function buildIfStale() {
-  const built = existsSync(OUTPUT) ? statSync(OUTPUT).mtimeMs : 0;
+  const built = existsSync(SERVER_ENTRY) ? statSync(SERVER_ENTRY).mtimeMs : 0;
   const sources = Math.max(...INPUTS.map(newestMtime));
   if (built > sources) return false;
   console.log('→ building (astro build)…');
