@@ -7,12 +7,15 @@ import { ROOT, TEMPLATE_DB, TMP_ROOT } from './paths';
 
 export interface TestServer {
   url: string;
+  authSecret: string;
   dir: string;
   dbPath: string;
   uploadsDir: string;
   output: () => string;
   stop: () => Promise<void>;
 }
+
+const TEST_AUTH_SECRET = 'test-secret-'.padEnd(48, 'x');
 
 export function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -46,7 +49,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
       PORT: String(port),
       DATABASE_URL: `file:${dbPath}`,
       UPLOADS_DIR: uploadsDir,
-      AUTH_SECRET: 'test-secret-'.padEnd(48, 'x'),
+      AUTH_SECRET: TEST_AUTH_SECRET,
       SEED_DEMO: '0',
       NODE_ENV: 'production',
       ...env,
@@ -70,6 +73,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
   }
   return {
     url,
+    authSecret: env.AUTH_SECRET ?? TEST_AUTH_SECRET,
     dir,
     dbPath,
     uploadsDir,

@@ -1,9 +1,18 @@
+import { encode } from '@auth/core/jwt';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, DEMO_PASSWORD } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
 import { anonymous, attemptSignIn, signIn } from '../helpers/session';
 
 let server: TestServer;
+
+async function userIdOf(email: string): Promise<string> {
+  const { createClient } = await import('@libsql/client');
+  const db = createClient({ url: `file:${server.dbPath}` });
+  const { rows } = await db.execute({ sql: 'select id from users where email = ?', args: [email] });
+  db.close();
+  return String(rows[0].id);
+}
 beforeAll(async () => {
   server = await startServer();
 });
@@ -48,6 +57,20 @@ describe('sign-in', () => {
   it('keeps counting per account: another account from the same address still signs in', async () => {
     const other = await attemptSignIn(server.url, DEMO.admin, DEMO_PASSWORD);
     expect(other.jar.header()).toContain('session-token');
+  });
+
+  it('ends a session 12 hours after sign-in, however fresh the cookie is', async () => {
+    const client = await signIn(server.url, DEMO.viewer);
+    const me = (await (await client.fetch('/api/venues')).json()) as { venues: unknown[] };
+    expect(me.venues.length).toBe(1);
+    const sub = await userIdOf(DEMO.viewer);
+    const salt = 'authjs.session-token';
+    const mint = (ageHours: number) =>
+      encode({ token: { sub, authTime: Date.now() - ageHours * 3600_000 }, secret: server.authSecret, salt, maxAge: 3600 });
+    const fresh = await fetch(`${server.url}/api/venues`, { headers: { cookie: `${salt}=${await mint(11.9)}` } });
+    expect(fresh.status).toBe(200);
+    const stale = await fetch(`${server.url}/api/venues`, { headers: { cookie: `${salt}=${await mint(12.1)}` } });
+    expect(stale.status).toBe(401);
   });
 
   it('rejects a forged session cookie', async () => {

@@ -22,11 +22,13 @@ export const POST: APIRoute = async (context) => {
   const retryAfter = await signInRetryAfter(email, address);
   if (retryAfter > 0) {
     const minutes = Math.ceil(retryAfter / 60);
-    return json(
-      { error: `Too many wrong passwords for this account. Wait ${minutes} minute${minutes === 1 ? '' : 's'} and try again, or ask a manager to check your account.` },
-      429,
-      { 'retry-after': String(retryAfter) },
-    );
+    const error = `Too many wrong passwords for this account. Wait ${minutes} minute${minutes === 1 ? '' : 's'} and try again, or ask a manager to check your account.`;
+    if ((context.request.headers.get('accept') ?? '').includes('text/html')) {
+      // A browser posting the sign-in form gets a page, not JSON; the status stays 429.
+      const html = `<!doctype html><html lang="en"><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>Wait a moment · Throwline</title><body style="font-family:system-ui,sans-serif;max-width:32rem;margin:3rem auto;padding:0 1rem"><h1>Wait a moment</h1><p>${error}</p><p><a href="/signin">Back to sign-in</a></p></body></html>`;
+      return new Response(html, { status: 429, headers: { 'content-type': 'text/html; charset=utf-8', 'retry-after': String(retryAfter) } });
+    }
+    return json({ error }, 429, { 'retry-after': String(retryAfter) });
   }
 
   const response = (await authHandlers.POST(context)) as Response;
