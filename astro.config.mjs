@@ -20,7 +20,6 @@ export default defineConfig({
     checkOrigin: true,
     allowedDomains: [{ protocol: 'http' }, { protocol: 'https' }],
   },
-  telemetry: false,
   devToolbar: { enabled: false },
   vite: {
     plugins: [tailwindcss()],

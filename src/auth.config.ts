@@ -1,5 +1,5 @@
 import Credentials from '@auth/core/providers/credentials';
-import { defineConfig } from 'auth-astro';
+import type { AuthConfig } from '@auth/core';
 import { verifyCredentials } from './server/auth/credentials';
 import { getConfig } from './server/config';
 import { SESSION_LIFETIME_SECONDS } from './server/session';
@@ -8,7 +8,10 @@ import { SESSION_LIFETIME_SECONDS } from './server/session';
  * Auth.js settings. The secret and trustHost are read from the environment when a request
  * comes in, never at build time, so the secret cannot end up in the build output.
  */
-const config = defineConfig({
+/** auth-astro's routes live under /api/auth; Auth.js needs the same path as its basePath. */
+const config: AuthConfig & { prefix: string } = {
+  prefix: '/api/auth',
+  basePath: '/api/auth',
   providers: [
     Credentials({
       credentials: { email: { label: 'E-mail', type: 'email' }, password: { label: 'Password', type: 'password' } },
@@ -32,7 +35,7 @@ const config = defineConfig({
       return session;
     },
   },
-});
+};
 
 Object.defineProperty(config, 'secret', { get: () => getConfig().AUTH_SECRET, enumerable: true });
 Object.defineProperty(config, 'trustHost', { get: () => getConfig().AUTH_TRUST_HOST, enumerable: true });

@@ -1,5 +1,5 @@
 import type { APIRoute } from 'astro';
-import { AstroAuth } from 'auth-astro/server';
+import { AstroAuth } from '../../../server/auth/astro-auth.mjs';
 import { clearSignInFailures, recordSignInFailure, signInRetryAfter } from '../../../server/auth/rate-limit';
 import { json } from '../../../server/http';
 
