@@ -8,6 +8,11 @@ import { TEMPLATE_DB, TMP_ROOT } from '../helpers/paths';
  * that every test server copies, so each test file starts from the same known demo data.
  */
 export default function setup() {
+  // Both the integration and the e2e project name this setup; the second call must not
+  // rebuild or replace the template while the first project's servers copy it.
+  const flag = globalThis as { __throwlineSetupDone?: boolean };
+  if (flag.__throwlineSetupDone) return;
+  flag.__throwlineSetupDone = true;
   buildIfStale();
   mkdirSync(TMP_ROOT, { recursive: true });
   rmSync(TEMPLATE_DB, { force: true });
