@@ -1,10 +1,21 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, like, or } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '../db/schema';
 import type { PmNode } from '../lib/doc/types';
-import { getDb } from './db';
+import type { PageCreate } from '../lib/schemas/page';
+import { slugify } from '../lib/slug';
+import { recordAudit } from './audit';
+import { getDb, writeTx, type Tx } from './db';
+import type { Action } from '../lib/permissions';
+import { loadVenue, requirePermission, requireUser } from './guard';
 import { HttpError } from './http';
+import { checkDocOrThrow } from './page-doc';
+import { revisionJson } from './revision-json';
+import type { SessionUser } from './session';
 
 const PAGE_NOT_FOUND = 'There is no such page in this venue.';
+
+/** Page slugs that would be shadowed by a fixed route under /venues/:venue/. */
+export const RESERVED_PAGE_SLUGS = new Set(['new', 'sections', 'files', 'advance', 'members', 'audit', 'settings', 'history', 'edit', 'search', 'changes', 'print']);
 
 /** A page of a venue with its current revision; 404 when the slug is not a page of this venue. */
 export async function loadPageWithCurrent(venueId: string, pageSlug: string | undefined) {
@@ -33,4 +44,92 @@ export async function loadPageWithCurrent(venueId: string, pageSlug: string | un
       ? { ...row.revision, doc: JSON.parse(row.revision.doc) as PmNode, authorName: row.authorName ?? 'a former member' }
       : null,
   };
+}
+
+export type LoadedPage = Awaited<ReturnType<typeof loadPageWithCurrent>>;
+
+/** The page as the JSON routes describe it (GET /api/venues/:venue/pages/:page). */
+export function pageJson(page: typeof pages.$inferSelect, section: { slug: string; title: string }) {
+  return {
+    id: page.id,
+    slug: page.slug,
+    title: page.title,
+    section,
+    currentRevision: page.currentRevision,
+    inAdvance: page.inAdvance,
+    createdAt: page.createdAt,
+    updatedAt: page.updatedAt,
+  };
+}
+
+/** Just the page row, for routes that need its id (history, one revision). */
+export async function findPage(venueId: string, pageSlug: string | undefined) {
+  if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
+  const db = await getDb();
+  const [page] = await db.select().from(pages).where(and(eq(pages.venueId, venueId), eq(pages.slug, pageSlug))).limit(1);
+  if (!page) throw new HttpError(404, PAGE_NOT_FOUND);
+  return page;
+}
+
+/** The section of this venue with that slug, inside a write; a 400 naming the field otherwise. */
+export async function sectionInTx(tx: Tx, venueId: string, sectionSlug: string) {
+  const [section] = await tx.select().from(sections).where(and(eq(sections.venueId, venueId), eq(sections.slug, sectionSlug))).limit(1);
+  if (!section) throw new HttpError(400, `This venue has no section "${sectionSlug.slice(0, 60)}"; choose one of its sections.`, 'section');
+  return section;
+}
+
+/** A free slug for a new page: the asked-for one (409 when taken) or the title's, numbered if needed. */
+async function freePageSlug(tx: Tx, venueId: string, title: string, asked?: string): Promise<string> {
+  let base = asked ?? (slugify(title) || 'page');
+  if (RESERVED_PAGE_SLUGS.has(base)) {
+    if (asked) throw new HttpError(400, `"${asked}" is kept for a screen of Throwline; choose another slug.`, 'slug');
+    base = `${base}-page`;
+  }
+  const taken = new Set(
+    (await tx.select({ slug: pages.slug }).from(pages).where(and(eq(pages.venueId, venueId), or(eq(pages.slug, base), like(pages.slug, `${base}-%`))))).map((r) => r.slug),
+  );
+  if (!taken.has(base)) return base;
+  if (asked) throw new HttpError(409, `A page with the slug "${asked}" exists already in this venue; choose another.`, 'slug');
+  for (let n = 2; n < 1000; n++) if (!taken.has(`${base}-${n}`)) return `${base}-${n}`;
+  throw new HttpError(409, 'Too many pages share this title; give the page a different title.', 'title');
+}
+
+/** Creates a page with its first revision, in one transaction with its audit event. */
+export async function createPage(venueId: string, input: PageCreate, actor: SessionUser) {
+  const { doc, plainText } = checkDocOrThrow(input.doc);
+  const summary = input.summary ?? '';
+  return writeTx(async (tx) => {
+    const section = await sectionInTx(tx, venueId, input.section);
+    const slug = await freePageSlug(tx, venueId, input.title, input.slug);
+    const now = new Date();
+    const [page] = await tx
+      .insert(pages)
+      .values({ venueId, sectionId: section.id, slug, title: input.title, currentRevision: 1, createdAt: now, updatedAt: now })
+      .returning();
+    const [revision] = await tx
+      .insert(revisions)
+      .values({ pageId: page.id, number: 1, doc: JSON.stringify(doc), plainText, summary, authorId: actor.id, createdAt: now })
+      .returning();
+    await recordAudit(tx, {
+      venueId,
+      actorId: actor.id,
+      action: 'page.create',
+      targetType: 'page',
+      targetId: page.id,
+      detail: { slug, title: input.title, section: section.slug, revision: 1, summary },
+    });
+    return {
+      page: pageJson(page, { slug: section.slug, title: section.title }),
+      revision: revisionJson(revision, { id: actor.id, name: actor.name }, doc),
+    };
+  });
+}
+
+/** 401 → 404 (venue, then page) → 403 for routes about one page. */
+export async function guardPage(user: SessionUser | null | undefined, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
+  const signedIn = requireUser(user);
+  const ctx = await loadVenue(signedIn, venueSlug);
+  const page = await findPage(ctx.venue.id, pageSlug);
+  requirePermission(signedIn, action, ctx.access);
+  return { ...ctx, user: signedIn, page };
 }

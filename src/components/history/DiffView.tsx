@@ -1,0 +1,72 @@
+import { useMemo, useState } from 'react';
+import useSWR from 'swr';
+import { diffStats, foldUnchanged, wordDiff } from '../../lib/doc/word-diff';
+import { fetchJson } from './fetch-json';
+import type { RevisionFull } from './types';
+
+interface Props {
+  base: string;
+  older: number;
+  newer: number;
+}
+
+/**
+ * The word-level difference between two revisions' text. Parts are rendered as React text, so
+ * whatever a page contains is shown, never interpreted.
+ */
+export function DiffView({ base, older, newer }: Props) {
+  const a = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${older}`, fetchJson);
+  const b = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${newer}`, fetchJson);
+  const [whole, setWhole] = useState(false);
+  const parts = useMemo(
+    () => (a.data && b.data ? wordDiff(a.data.revision.plainText, b.data.revision.plainText) : null),
+    [a.data, b.data],
+  );
+  if (a.error || b.error) return <p className="text-danger">{(a.error ?? b.error).message}</p>;
+  if (!parts) return <p className="text-muted">Comparing…</p>;
+  const stats = diffStats(parts);
+  const changed = stats.added + stats.removed > 0;
+  const shown = whole ? parts : foldUnchanged(parts);
+  const folded = shown.length !== parts.length;
+  return (
+    <div>
+      <p className="text-sm text-muted" data-testid="diff-stats">
+        {changed ? (
+          <>
+            From revision {older} to {newer}: <span className="font-semibold text-ok">{stats.added} words added</span>,{' '}
+            <span className="font-semibold text-danger">{stats.removed} removed</span>.
+          </>
+        ) : (
+          <>Revisions {older} and {newer} have the same text.</>
+        )}
+      </p>
+      <div className="mt-2 max-h-[70vh] overflow-auto whitespace-pre-wrap rounded-lg border border-line bg-surface p-3 leading-relaxed" data-testid="diff">
+        {shown.map((p, i) =>
+          p.kind === 'fold' ? (
+            <button key={i} type="button" onClick={() => setWhole(true)} className="my-1 block w-full rounded-md bg-sunken px-2 py-2 text-left text-sm text-muted hover:text-fg">
+              ⋯ {p.lines} unchanged line{p.lines === 1 ? '' : 's'} (show)
+            </button>
+          ) : p.kind === 'added' ? (
+            <ins key={i} className="rounded-sm bg-ok/20 text-fg underline decoration-ok decoration-2" title="added">
+              {p.text}
+            </ins>
+          ) : p.kind === 'removed' ? (
+            <del key={i} className="rounded-sm bg-danger/15 text-fg decoration-danger decoration-2" title="removed">
+              {p.text}
+            </del>
+          ) : (
+            <span key={i}>{p.text}</span>
+          ),
+        )}
+      </div>
+      {(folded || whole) && changed && (
+        <button type="button" onClick={() => setWhole((w) => !w)} className="mt-1 min-h-11 rounded-md px-2 text-sm underline">
+          {whole ? 'Show only the changes' : 'Show the whole text'}
+        </button>
+      )}
+      <p className="mt-1 text-xs text-muted">
+        <ins className="bg-ok/20 underline decoration-ok">Underlined</ins> words were added, <del className="bg-danger/15 decoration-danger">struck-through</del> words removed.
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,16 @@
+export interface RevisionSummary {
+  number: number;
+  summary: string;
+  author: { id: string | null; name: string };
+  createdAt: string;
+  restoredFrom: number | null;
+}
+
+export interface RevisionFull extends RevisionSummary {
+  plainText: string;
+}
+
+export interface HistoryAnswer {
+  page: { slug: string; title: string; currentRevision: number };
+  revisions: RevisionSummary[];
+}

@@ -1,0 +1,109 @@
+import { z } from 'zod';
+import { SLUG_PATTERN } from '../slug';
+
+/**
+ * Request bodies for pages, revisions, sections and search, shared by the editor island and the
+ * routes. Every object is strict: a key the route does not take (authorId, venueId, number…) is
+ * a 400, never silently ignored. The document itself is only typed as "some value" here; its real
+ * check is validateDoc, which must walk it without recursion before anything else does.
+ */
+/** A strict object whose refusals read as sentences: an extra key is named, a non-object explained. */
+function strictBody<T extends z.core.$ZodLooseShape>(shape: T) {
+  return z.strictObject(shape, {
+    error: (iss) =>
+      iss.code === 'unrecognized_keys'
+        ? `This request cannot set ${iss.keys.map((k) => `"${k}"`).join(', ')}; remove ${iss.keys.length > 1 ? 'them' : 'it'}.`
+        : iss.code === 'invalid_type'
+          ? 'Send a JSON object.'
+          : undefined,
+  });
+}
+
+const title = z
+  .string({ error: 'Give the page a title (text).' })
+  .trim()
+  .min(1, 'Give the page a title.')
+  .max(140, 'Keep the title under 140 characters.');
+
+const summary = z
+  .string({ error: 'The summary must be text.' })
+  .trim()
+  .max(200, 'Keep the summary to one line (under 200 characters).')
+  .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.');
+
+const sectionSlug = z
+  .string({ error: 'Choose a section.' })
+  .min(1, 'Choose a section.')
+  .max(60, 'Choose one of the sections of this venue.');
+
+const revisionNumber = z
+  .number({ error: 'Say which revision you started from: baseRevision must be a number.' })
+  .int('baseRevision must be a whole number.')
+  .min(0, 'baseRevision cannot be negative.');
+
+const doc = z.unknown().refine((d) => d !== undefined, 'Send the page text as a document ("doc").');
+
+export const PageCreateSchema = strictBody({
+  title,
+  section: sectionSlug,
+  doc,
+  summary: summary.optional(),
+  slug: z
+    .string({ error: 'The slug must be text.' })
+    .regex(SLUG_PATTERN, 'The slug may use only lower-case letters, digits and single hyphens, e.g. "stage-patch".')
+    .max(60, 'Keep the slug under 60 characters.')
+    .optional(),
+});
+export type PageCreate = z.infer<typeof PageCreateSchema>;
+
+export const PageSaveSchema = strictBody({
+  doc,
+  baseRevision: revisionNumber,
+  summary: summary.optional(),
+  title: title.optional(),
+  section: sectionSlug.optional(),
+});
+export type PageSave = z.infer<typeof PageSaveSchema>;
+
+export const RestoreSchema = strictBody({
+  baseRevision: revisionNumber.optional(),
+  summary: summary.optional(),
+});
+export type RestoreRequest = z.infer<typeof RestoreSchema>;
+
+export const SEARCH_MAX_LENGTH = 200;
+
+/** Query parameters, so other keys are ignored rather than refused. */
+export const SearchQuerySchema = z.object({
+  q: z
+    .string({ error: 'Add ?q= with the words to search for.' })
+    .max(SEARCH_MAX_LENGTH, `Keep the search under ${SEARCH_MAX_LENGTH} characters.`),
+  limit: z.coerce
+    .number({ error: 'limit must be a number.' })
+    .int('limit must be a whole number.')
+    .min(1, 'limit must be at least 1.')
+    .max(50, 'limit may be at most 50.')
+    .optional(),
+});
+
+const sectionTitle = z
+  .string({ error: 'Give the section a title (text).' })
+  .trim()
+  .min(1, 'Give the section a title.')
+  .max(60, 'Keep the section title under 60 characters.');
+
+export const SectionCreateSchema = strictBody({
+  title: sectionTitle,
+  slug: z
+    .string({ error: 'The slug must be text.' })
+    .regex(SLUG_PATTERN, 'The slug may use only lower-case letters, digits and single hyphens, e.g. "backline".')
+    .max(60, 'Keep the slug under 60 characters.')
+    .optional(),
+});
+export type SectionCreate = z.infer<typeof SectionCreateSchema>;
+
+export const SectionUpdateSchema = strictBody({
+  title: sectionTitle.optional(),
+  move: z.enum(['up', 'down'], { error: 'move is "up" or "down".' }).optional(),
+}).refine((v) => v.title !== undefined || v.move !== undefined, 'Send a new title or a move ("up" or "down").');
+export type SectionUpdate = z.infer<typeof SectionUpdateSchema>;

@@ -1,0 +1,26 @@
+import type { APIRoute } from 'astro';
+import { PageSaveSchema } from '../../../../../../lib/schemas/page';
+import { guardVenue } from '../../../../../../server/guard';
+import { handle, json, parseWith, readJsonBody } from '../../../../../../server/http';
+import { guardPage, loadPageWithCurrent, pageJson } from '../../../../../../server/pages';
+import { authorJson, revisionJson } from '../../../../../../server/revision-json';
+import { saveRevision } from '../../../../../../server/revisions';
+
+export const GET: APIRoute = ({ locals, params }) =>
+  handle(async () => {
+    const { venue } = await guardVenue(locals.user, params.venue, 'venue.read');
+    const { page, section, revision } = await loadPageWithCurrent(venue.id, params.page);
+    return json({
+      page: pageJson(page, section),
+      revision: revision ? revisionJson(revision, authorJson(revision.authorId, revision.authorName), revision.doc) : null,
+    });
+  });
+
+/** Saves on top of `baseRevision`; 409 with the current revision when someone saved first. */
+export const PUT: APIRoute = ({ locals, params, request }) =>
+  handle(async () => {
+    const { venue, user } = await guardPage(locals.user, params.venue, params.page, 'page.edit');
+    const input = parseWith(PageSaveSchema, await readJsonBody(request));
+    const saved = await saveRevision(venue.id, params.page, input, user);
+    return json(saved);
+  });

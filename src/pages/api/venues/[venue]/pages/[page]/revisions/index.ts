@@ -1,0 +1,12 @@
+import type { APIRoute } from 'astro';
+import { handle, json } from '../../../../../../../server/http';
+import { guardPage } from '../../../../../../../server/pages';
+import { listRevisions } from '../../../../../../../server/revisions';
+
+/** The history of a page, newest first. */
+export const GET: APIRoute = ({ locals, params }) =>
+  handle(async () => {
+    const { page } = await guardPage(locals.user, params.venue, params.page, 'venue.read');
+    const revisions = await listRevisions(page.id);
+    return json({ page: { slug: page.slug, title: page.title, currentRevision: page.currentRevision }, revisions });
+  });
