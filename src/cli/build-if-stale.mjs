@@ -22,7 +22,9 @@ export function buildIfStale() {
   if (built > sources) return false;
   console.log('→ building (astro build)…');
   // Configuration comes from the environment at run time only; nothing secret is built in.
-  const env = { ...process.env, ASTRO_TELEMETRY_DISABLED: '1' };
+  // NODE_ENV=production also when called from vitest (which sets "test"): a build made for
+  // another mode ships React's development runtime and fails when served in production.
+  const env = { ...process.env, ASTRO_TELEMETRY_DISABLED: '1', NODE_ENV: 'production' };
   delete env.AUTH_SECRET;
   run(process.execPath, ['node_modules/astro/astro.js', 'build'], { env });
   return true;

@@ -44,7 +44,7 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
             ]
           : [
               ['manager', 'manager'],
-              ['otherManager', 'manager'],
+              ['othermanager', 'manager'],
             ];
       await tx.insert(memberships).values(members.filter(([key]) => ids[key]).map(([key, role]) => ({ venueId: venue.id, userId: ids[key], role })));
 

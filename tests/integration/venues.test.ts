@@ -55,6 +55,12 @@ describe('GET /api/venues/:venue/pages', () => {
     expect(await hidden.json()).toEqual(await missing.json());
   });
 
+  it('the manager of the second venue reads it, and only it', async () => {
+    const { venues } = (await (await as.otherManager.fetch('/api/venues')).json()) as { venues: { slug: string; role: string }[] };
+    expect(venues.map((v) => [v.slug, v.role])).toEqual([[otherVenue, 'manager']]);
+    expect((await as.otherManager.fetch(`/api/venues/${otherVenue}/pages`)).status).toBe(200);
+  });
+
   it('the engineer of the main venue cannot see the second venue (404)', async () => {
     expect((await as.engineer.fetch(`/api/venues/${otherVenue}/pages`)).status).toBe(404);
   });
