@@ -1,0 +1,64 @@
+import useSWR from 'swr';
+import type { FileView, PageRef } from '../../lib/schemas/file';
+import { FileCard } from './FileCard';
+import { Uploader } from './Uploader';
+
+interface Props {
+  venueSlug: string;
+  initialFiles: FileView[];
+  pages: PageRef[];
+  mayUpload: boolean;
+  mayDelete: boolean;
+}
+
+async function fetchFiles(url: string): Promise<FileView[]> {
+  const res = await fetch(url, { headers: { accept: 'application/json' } });
+  if (!res.ok) throw new Error(`The file list could not be loaded (HTTP ${res.status}).`);
+  return ((await res.json()) as { files: FileView[] }).files;
+}
+
+/** The venue's photos and files: an uploader for those who may, then the grid. */
+export default function FilesBoard({ venueSlug, initialFiles, pages, mayUpload, mayDelete }: Props) {
+  const key = `/api/venues/${encodeURIComponent(venueSlug)}/files`;
+  const { data: files = initialFiles, mutate, error } = useSWR(key, fetchFiles, { fallbackData: initialFiles, revalidateOnMount: false });
+
+  return (
+    <div className="space-y-8">
+      {mayUpload && (
+        <section aria-labelledby="upload-heading" className="rounded-xl border border-line bg-sunken/40 p-4">
+          <h2 id="upload-heading" className="mb-3 text-lg font-semibold">
+            Add photos and files
+          </h2>
+          <Uploader venueSlug={venueSlug} pages={pages} onUploaded={(file) => mutate((list = []) => [file, ...list.filter((f) => f.id !== file.id)], { revalidate: false })} />
+        </section>
+      )}
+      <section aria-labelledby="files-heading">
+        <h2 id="files-heading" className="mb-3 text-lg font-semibold">
+          {files.length === 1 ? '1 file' : `${files.length} files`}
+        </h2>
+        {error && (
+          <p className="mb-3 text-sm text-danger" role="alert">
+            {String(error.message ?? error)}
+          </p>
+        )}
+        {files.length === 0 ? (
+          <p className="text-muted">No photos or files yet.{mayUpload ? ' Photograph the racks, the patch bays and the rigging points, and add them here.' : ''}</p>
+        ) : (
+          <ul className="grid grid-cols-1 gap-4 min-[420px]:grid-cols-2 md:grid-cols-3 lg:grid-cols-4" data-testid="file-grid">
+            {files.map((file) => (
+              <FileCard
+                key={file.id}
+                file={file}
+                venueSlug={venueSlug}
+                mayEdit={mayUpload}
+                mayDelete={mayDelete}
+                onChanged={(next) => mutate((list = []) => list.map((f) => (f.id === next.id ? next : f)), { revalidate: false })}
+                onDeleted={() => mutate((list = []) => list.filter((f) => f.id !== file.id), { revalidate: false })}
+              />
+            ))}
+          </ul>
+        )}
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,65 @@
+import { z } from 'zod';
+
+/** One uploaded file may be at most 25 MiB; the server refuses more before or while reading. */
+export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;
+
+/** What the file picker offers; on a phone `image/*` opens the camera roll and the camera. */
+export const UPLOAD_ACCEPT = 'image/*,application/pdf';
+
+export const MAX_CAPTION_CHARS = 500;
+
+const caption = z
+  .string({ error: 'The caption must be text.' })
+  .trim()
+  .max(MAX_CAPTION_CHARS, `Keep the caption under ${MAX_CAPTION_CHARS} characters.`);
+
+/** The text fields that travel beside the file in a multipart upload. */
+export const FileUploadFieldsSchema = z.object({
+  caption: caption.default(''),
+  /** Slug of a page of the same venue the file belongs to; empty means none. */
+  page: z
+    .string({ error: 'The page must be given by its slug.' })
+    .trim()
+    .max(100, 'There is no page with such a long slug.')
+    .optional()
+    .transform((v) => (v ? v : undefined)),
+});
+export type FileUploadFields = z.infer<typeof FileUploadFieldsSchema>;
+
+export const FileCaptionSchema = z.object({ caption }).strict();
+export type FileCaption = z.infer<typeof FileCaptionSchema>;
+
+export const FILE_VARIANTS = ['original', 'display', 'thumb'] as const;
+export type FileVariant = (typeof FILE_VARIANTS)[number];
+
+export interface PageRef {
+  slug: string;
+  title: string;
+}
+
+/** A file as the API and the files screen see it. */
+export interface FileView {
+  id: string;
+  kind: 'image' | 'pdf';
+  mime: string;
+  /** The uploader's file name, cleaned; display text only. */
+  originalName: string;
+  caption: string;
+  sizeBytes: number;
+  width: number | null;
+  height: number | null;
+  /** `/files/<id>`: the stored original (for photos: re-encoded, orientation applied, no metadata). */
+  url: string;
+  /** `/files/<id>/display`: WebP, at most 1600 px on the long edge. Null for PDFs. */
+  displayUrl: string | null;
+  /** `/files/<id>/thumb`: WebP, at most 400 px on the long edge. Null for PDFs. */
+  thumbUrl: string | null;
+  /** The page the file was uploaded for, if any. */
+  page: PageRef | null;
+  /** Pages whose current revision shows or links to this file. */
+  usedBy: PageRef[];
+  uploadedBy: string | null;
+  createdAt: string;
+  /** True when the start-up check found the row's bytes gone from disk. */
+  missing: boolean;
+}
