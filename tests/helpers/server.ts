@@ -79,7 +79,8 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
     uploadsDir,
     output: () => log,
     stop: async () => {
-      if (child.exitCode === null) {
+      // A process ended by a signal keeps exitCode null; signalCode tells it has gone.
+      if (child.exitCode === null && child.signalCode === null) {
         const exited = new Promise((r) => child.once('exit', r));
         child.kill('SIGTERM');
         await exited;

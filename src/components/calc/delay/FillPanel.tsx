@@ -1,0 +1,47 @@
+import { fillDelayMs, msToSamples } from '../../../lib/acoustics';
+import NumberField from '../NumberField';
+import Panel from '../Panel';
+import Result, { Figure } from '../Result';
+import { attempt, num } from '../attempt';
+import { fixed } from '../format';
+import { toMeters } from '../unit-switch';
+import { GUIDE, type DelayPanelProps } from './delay-state';
+
+/** Delay for a fill loudspeaker so the main arrives first at the listener. */
+export default function FillPanel({ s, set, air }: DelayPanelProps) {
+  const outcome = attempt(() => {
+    if (!air.ok) throw new RangeError(air.message);
+    const result = fillDelayMs({
+      mainMeters: toMeters(num(s.main, 'the distance to the main'), s.unit),
+      fillMeters: toMeters(num(s.fill, 'the distance to the fill'), s.unit),
+      temperatureCelsius: air.value.celsius,
+      precedenceOffsetMs: num(s.offset, 'the precedence offset'),
+    });
+    return { ...result, samples: msToSamples(result.delayMs, num(s.rate, 'the sample rate')) };
+  });
+  return (
+    <Panel title="Fill alignment" guide={`${GUIDE}#fill-alignment`} testId="fill-panel">
+      <div className="grid grid-cols-2 gap-3">
+        <NumberField label="Main to listener" value={s.main} onChange={(main) => set({ main })} unit={s.unit} testId="fill-main" />
+        <NumberField label="Fill to listener" value={s.fill} onChange={(fill) => set({ fill })} unit={s.unit} testId="fill-fill" />
+      </div>
+      <NumberField label="Precedence offset" value={s.offset} onChange={(offset) => set({ offset })} unit="ms" hint="Extra delay so the main still leads: 5–10 ms is common practice." testId="fill-offset" />
+      <Result outcome={outcome} testId="fill-result">
+        {({ delayMs, delayOn, samples }) => (
+          <div className="flex flex-col gap-2">
+            <div className="flex flex-wrap gap-x-6 gap-y-2">
+              <Figure label={delayOn === 'fill' ? 'Delay the fill by' : 'The main would need'} value={s.timeUnit === 'samples' ? fixed(samples, 0) : fixed(delayMs, 2)} unit={s.timeUnit} big testId="fill-delay" />
+              <Figure label={s.timeUnit === 'samples' ? 'In ms' : 'In samples'} value={s.timeUnit === 'samples' ? fixed(delayMs, 2) : fixed(samples, 0)} unit={s.timeUnit === 'samples' ? 'ms' : 'samples'} />
+            </div>
+            {delayOn === 'main' && (
+              <p className="text-sm text-warn">
+                The fill is farther from this listener than the main, so no fill delay can line them up. Delaying the main instead moves everything it covers; check the
+                positions first.
+              </p>
+            )}
+          </div>
+        )}
+      </Result>
+    </Panel>
+  );
+}

@@ -1,0 +1,50 @@
+import { delayMs, distanceFromMs, msToSamples, samplesToMs } from '../../../lib/acoustics';
+import Choice from '../Choice';
+import NumberField from '../NumberField';
+import Panel from '../Panel';
+import Result, { Figure } from '../Result';
+import { attempt, num } from '../attempt';
+import { fixed } from '../format';
+import { fromMeters, toMeters } from '../unit-switch';
+import { GUIDE, type DelayPanelProps } from './delay-state';
+
+/** Distance ↔ milliseconds ↔ samples, from either end. */
+export default function TravelPanel({ s, set, air }: DelayPanelProps) {
+  const fromDistance = s.start !== 'time';
+  const outcome = attempt(() => {
+    if (!air.ok) throw new RangeError(air.message);
+    const rate = num(s.rate, 'the sample rate');
+    if (fromDistance) {
+      const ms = delayMs(toMeters(num(s.dist, 'the distance'), s.unit), air.value.celsius);
+      return { ms, samples: msToSamples(ms, rate), meters: null };
+    }
+    const typed = num(s.time, s.timeUnit === 'samples' ? 'the number of samples' : 'the time');
+    const ms = s.timeUnit === 'samples' ? samplesToMs(typed, rate) : typed;
+    return { ms, samples: msToSamples(ms, rate), meters: distanceFromMs(ms, air.value.celsius) };
+  });
+  const timeFigures = (ms: number, samples: number) => {
+    const msFigure = <Figure key="ms" label="Time" value={fixed(ms, 2)} unit="ms" big={s.timeUnit === 'ms'} testId="travel-ms" />;
+    const samplesFigure = (
+      <Figure key="samples" label={`Samples (≈ ${Math.round(samples)})`} value={fixed(samples, 1)} unit="samples" big={s.timeUnit === 'samples'} testId="travel-samples" />
+    );
+    return s.timeUnit === 'samples' ? [samplesFigure, msFigure] : [msFigure, samplesFigure];
+  };
+  return (
+    <Panel title="Travel time" guide={`${GUIDE}#travel-time`} testId="travel-panel">
+      <Choice label="Start from" value={fromDistance ? 'distance' : 'time'} onChange={(start) => set({ start })} options={[{ value: 'distance', label: 'Distance' }, { value: 'time', label: 'Time' }]} testId="travel-start" />
+      {fromDistance ? (
+        <NumberField label="Distance" value={s.dist} onChange={(dist) => set({ dist })} unit={s.unit} testId="travel-distance" />
+      ) : (
+        <NumberField label={s.timeUnit === 'samples' ? 'Delay in samples' : 'Delay time'} value={s.time} onChange={(time) => set({ time })} unit={s.timeUnit} testId="travel-time" />
+      )}
+      <Result outcome={outcome} testId="travel-result">
+        {({ ms, samples, meters }) => (
+          <div className="flex flex-wrap gap-x-6 gap-y-2">
+            {meters !== null && <Figure label="Distance" value={fixed(fromMeters(meters, s.unit), 2)} unit={s.unit} big testId="travel-distance-result" />}
+            {timeFigures(ms, samples)}
+          </div>
+        )}
+      </Result>
+    </Panel>
+  );
+}

@@ -1,0 +1,40 @@
+import { aWeightingDb, cWeightingDb, weightingDb, type WeightingCurve } from '../../../lib/acoustics';
+import Choice from '../Choice';
+import NumberField from '../NumberField';
+import Panel from '../Panel';
+import Result, { Figure } from '../Result';
+import { attempt, num } from '../attempt';
+import { fixed } from '../format';
+import { GUIDE, type LevelPanelProps } from './level-state';
+
+const CURVES = [
+  { value: 'A', label: 'A' },
+  { value: 'C', label: 'C' },
+  { value: 'Z', label: 'Z' },
+] as const;
+
+/** A, C or Z weighting at one frequency, with the other two beside it for comparison. */
+export default function WeightingPanel({ s, set }: LevelPanelProps) {
+  const curve = (CURVES.some((c) => c.value === s.curve) ? s.curve : 'A') as WeightingCurve;
+  const outcome = attempt(() => {
+    const f = num(s.wfreq, 'the frequency');
+    return { chosen: weightingDb(curve, f), a: aWeightingDb(f), c: cWeightingDb(f) };
+  });
+  return (
+    <Panel title="Weighting" guide={`${GUIDE}#weighting`} testId="weighting-panel">
+      <div className="grid grid-cols-2 gap-3">
+        <NumberField label="Frequency" value={s.wfreq} onChange={(wfreq) => set({ wfreq })} unit="Hz" testId="weighting-freq" />
+        <Choice label="Curve" value={curve} onChange={(c) => set({ curve: c })} options={CURVES} testId="weighting-curve" />
+      </div>
+      <Result outcome={outcome} testId="weighting-result">
+        {({ chosen, a, c }) => (
+          <div className="flex flex-wrap gap-x-6 gap-y-2">
+            <Figure label={`${curve}-weighting`} value={`${chosen > 0 ? '+' : ''}${fixed(chosen, 1)}`} unit="dB" big testId="weighting-db" />
+            {curve !== 'A' && <Figure label="A" value={fixed(a, 1)} unit="dB" />}
+            {curve !== 'C' && <Figure label="C" value={fixed(c, 1)} unit="dB" />}
+          </div>
+        )}
+      </Result>
+    </Panel>
+  );
+}

@@ -1,0 +1,9 @@
+import { backgroundCorrection } from '../../../lib/acoustics';
+import { BackgroundQuerySchema } from '../../../lib/schemas/calc';
+import { calcGet } from './_calc-route';
+
+/** The source alone from a total and a background reading; refused when they are too close. */
+export const GET = calcGet(BackgroundQuerySchema, ({ total, background }) => {
+  const source = backgroundCorrection(total, background);
+  return { source, correction: total - source };
+});
