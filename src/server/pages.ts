@@ -9,6 +9,7 @@ import type { Action } from '../lib/permissions';
 import { loadVenue, requirePermission, requireUser } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
+import { assertOwnFileRefs } from './page-file-refs';
 import { revisionJson } from './revision-json';
 import type { SessionUser } from './session';
 
@@ -100,6 +101,7 @@ export async function createPage(venueId: string, input: PageCreate, actor: Sess
   const summary = input.summary ?? '';
   return writeTx(async (tx) => {
     const section = await sectionInTx(tx, venueId, input.section);
+    await assertOwnFileRefs(tx, venueId, doc);
     const slug = await freePageSlug(tx, venueId, input.title, input.slug);
     const now = new Date();
     const [page] = await tx

@@ -6,6 +6,7 @@ import { recordAudit } from './audit';
 import { getDb, writeTx, type Tx } from './db';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
+import { assertOwnFileRefs } from './page-file-refs';
 import { pageJson, sectionInTx } from './pages';
 import { authorJson, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
@@ -89,6 +90,8 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
   const summary = input.summary ?? '';
   return writeTx(async (tx) => {
     const current = await pageInTx(tx, venueId, pageSlug);
+    // A document pointing at another venue's file, or at none, is bad input whatever the base.
+    await assertOwnFileRefs(tx, venueId, doc);
     if (current.currentRevision !== input.baseRevision) throw await conflict(tx, current, input.baseRevision);
     const section = input.section ? await sectionInTx(tx, venueId, input.section) : null;
     const titleChanged = input.title !== undefined && input.title !== current.title;
@@ -129,6 +132,7 @@ export async function restoreRevision(venueId: string, pageSlug: string | undefi
     const old = await revisionInTx(tx, current.id, n);
     if (!old) throw new HttpError(404, `This page has no revision ${n}.`);
     if (n === current.currentRevision) throw new HttpError(400, `Revision ${n} is the current text already; there is nothing to restore.`);
+    await assertOwnFileRefs(tx, venueId, JSON.parse(old.revision.doc) as PmNode, { restoring: n });
     const summary = input.summary || `Restored revision ${n}`;
     const { revision, page } = await appendRevision(tx, { page: current, doc: old.revision.doc, plainText: old.revision.plainText, summary, actor, restoredFrom: n });
     await recordAudit(tx, {

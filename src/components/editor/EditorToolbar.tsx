@@ -1,13 +1,22 @@
 import { useEditorState, type Editor } from '@tiptap/react';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { LinkForm } from './LinkForm';
+import { PhotoDialog, type PhotoTarget } from './PhotoDialog';
 import { ToolButton } from './ToolButton';
 
 type Block = 'p' | '1' | '2' | '3' | '4';
 
 /** The editing controls above the page text; table controls appear while the cursor is in a table. */
-export function EditorToolbar({ editor }: { editor: Editor }) {
+export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoTarget }) {
   const [linkOpen, setLinkOpen] = useState(false);
+  const [photoOpen, setPhotoOpen] = useState(false);
+  // ProseMirror keeps the cursor after the text loses focus; before the first click it sits at the top.
+  const everFocused = useRef(false);
+  useEffect(() => {
+    const onFocus = () => void (everFocused.current = true);
+    editor.on('focus', onFocus);
+    return () => void editor.off('focus', onFocus);
+  }, [editor]);
   const s = useEditorState({
     editor,
     selector: ({ editor: e }) => ({
@@ -57,6 +66,9 @@ export function EditorToolbar({ editor }: { editor: Editor }) {
         <ToolButton label="Link" active={s.link || linkOpen} onClick={() => setLinkOpen((o) => !o)} testId="tool-link">
           Link
         </ToolButton>
+        <ToolButton label="Photo" onClick={() => setPhotoOpen(true)} testId="tool-photo">
+          ▣ Photo
+        </ToolButton>
         {divider}
         <ToolButton label="Bulleted list" active={s.bullet} onClick={() => run().toggleBulletList().run()}>
           • List
@@ -100,6 +112,7 @@ export function EditorToolbar({ editor }: { editor: Editor }) {
         </ToolButton>
       </div>
       {linkOpen && <LinkForm editor={editor} onClose={() => setLinkOpen(false)} />}
+      {photoOpen && <PhotoDialog editor={editor} {...photo} atEnd={!everFocused.current} onClose={() => setPhotoOpen(false)} />}
     </div>
   );
 }

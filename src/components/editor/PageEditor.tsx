@@ -20,13 +20,15 @@ export interface PageEditorProps {
   page?: { slug: string; title: string; section: string };
   /** The revision the editor opens on (absent when creating). */
   current?: RevisionInfo;
+  /** Whether this person may upload photos (the page decides with `can()`); picking stored ones is always offered. */
+  mayUpload?: boolean;
 }
 
 const EMPTY_DOC: PmNode = { type: 'doc', content: [{ type: 'paragraph' }] };
 type Status = { kind: 'idle' } | { kind: 'saving' } | { kind: 'error'; message: string; field?: string };
 
 /** The page editor island: title and section, the text with its toolbar, drafts, save and conflicts. */
-export default function PageEditor({ venue, sections, page, current }: PageEditorProps) {
+export default function PageEditor({ venue, sections, page, current, mayUpload = false }: PageEditorProps) {
   const pageKey = page?.slug ?? NEW_PAGE_KEY;
   const [base, setBase] = useState(current?.number ?? 0);
   const [title, setTitle] = useState(page?.title ?? '');
@@ -177,7 +179,7 @@ export default function PageEditor({ venue, sections, page, current }: PageEdito
         )}
         <div>
           {conflict && <h3 className="mb-1 text-sm font-semibold uppercase tracking-wide text-muted">Your text (you can still edit it)</h3>}
-          <EditorToolbar editor={ed} />
+          <EditorToolbar editor={ed} photo={{ venueSlug: venue.slug, pageSlug: page?.slug, mayUpload }} />
           <EditorContent editor={ed} />
         </div>
       </div>

@@ -1,0 +1,54 @@
+import type { KeyedMutator } from 'swr';
+import type { FileView } from '../../lib/schemas/file';
+
+interface Props {
+  files: FileView[] | undefined;
+  error: Error | undefined;
+  onPick: (file: FileView) => void;
+}
+
+/** The venue's stored photos and PDFs as a grid of thumbnails; tapping one puts it into the page. */
+export function VenueFilePicker({ files, error, onPick }: Props) {
+  if (error) {
+    return (
+      <p role="alert" className="text-sm text-danger">
+        {error.message}
+      </p>
+    );
+  }
+  if (!files) return <p className="text-sm text-muted">Loading the venue’s files…</p>;
+  if (files.length === 0) return <p className="text-sm text-muted">No photos or files in this venue yet.</p>;
+  return (
+    <ul className="grid grid-cols-3 gap-2 sm:grid-cols-4" data-testid="photo-picker">
+      {files.map((file) => {
+        const name = file.caption || file.originalName;
+        return (
+          <li key={file.id}>
+            <button
+              type="button"
+              onClick={() => onPick(file)}
+              disabled={file.missing}
+              aria-label={`Add “${name}” to the page`}
+              title={file.missing ? 'Missing from storage; upload it again.' : name}
+              className="flex w-full flex-col overflow-hidden rounded-lg border border-line bg-bg text-left hover:border-accent focus-visible:border-accent disabled:opacity-40"
+              data-testid="photo-pick"
+              data-file-id={file.id}
+            >
+              {file.thumbUrl ? (
+                <img src={file.thumbUrl} alt="" loading="lazy" className="aspect-square w-full bg-sunken object-cover" />
+              ) : (
+                <span className="flex aspect-square w-full items-center justify-center bg-sunken text-lg font-bold text-muted">{file.kind === 'pdf' ? 'PDF' : '—'}</span>
+              )}
+              <span className="truncate px-1.5 py-1 text-xs">{name}</span>
+            </button>
+          </li>
+        );
+      })}
+    </ul>
+  );
+}
+
+/** Puts a freshly stored file at the head of the cached list, so it shows up without a refetch. */
+export function addToList(mutate: KeyedMutator<FileView[]>, file: FileView) {
+  return mutate((list = []) => [file, ...list.filter((f) => f.id !== file.id)], { revalidate: false });
+}

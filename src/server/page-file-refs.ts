@@ -1,0 +1,86 @@
+import { and, eq, inArray } from 'drizzle-orm';
+import { files } from '../db/schema';
+import type { PmNode } from '../lib/doc/types';
+import type { Tx } from './db';
+import { fileIdsInDoc } from './files/file-usage';
+import { HttpError } from './http';
+
+/** One place a page document points at a stored file: a photo, or a link to /files/…. */
+export interface FileRef {
+  kind: 'photo' | 'link';
+  fileId: string;
+  url: string;
+  /** What the person sees: the photo's description or the link's text. */
+  label: string;
+}
+
+/** Where ids are looked up in one query; well under SQLite's bound-parameter limit. */
+const LOOKUP_CHUNK = 500;
+
+/**
+ * Every file reference in a document, in reading order: image sources, and link targets that
+ * are paths on this site under /files/. Words in the text that merely look like a file address
+ * are not references, and neither are links to other hosts.
+ */
+export function fileRefsInDoc(doc: PmNode): FileRef[] {
+  const refs: FileRef[] = [];
+  const add = (kind: FileRef['kind'], url: unknown, label: string) => {
+    if (typeof url !== 'string' || !url.startsWith('/files/')) return;
+    for (const fileId of fileIdsInDoc(JSON.stringify(url))) refs.push({ kind, fileId, url, label });
+  };
+  // Validated documents are shallow (see DOC_LIMITS), but a loop keeps this safe on any input.
+  const stack: PmNode[] = [doc];
+  while (stack.length) {
+    const node = stack.pop()!;
+    if (node.type === 'image') add('photo', node.attrs?.src, typeof node.attrs?.alt === 'string' ? node.attrs.alt : '');
+    for (const mark of node.marks ?? []) if (mark.type === 'link') add('link', mark.attrs?.href, node.text ?? '');
+    if (node.content) for (let i = node.content.length - 1; i >= 0; i--) stack.push(node.content[i]);
+  }
+  return refs;
+}
+
+function quoted(label: string): string {
+  const flat = label.replace(/\s+/g, ' ').trim();
+  return flat ? `“${flat.length > 60 ? `${flat.slice(0, 57)}…` : flat}” ` : '';
+}
+
+/** What is being saved: a new text, or an old revision brought back. */
+export type RefContext = { restoring?: number };
+
+function refused(ref: FileRef, problem: 'missing' | 'pdf', { restoring }: RefContext): HttpError {
+  const thing = ref.kind === 'photo' ? `the photo ${quoted(ref.label)}(${ref.url})` : `the link ${quoted(ref.label)}to ${ref.url}`;
+  let sentence: string;
+  if (problem === 'pdf') {
+    sentence = `${restoring ? `Revision ${restoring} shows` : 'The page shows'} ${quoted(ref.label)}(${ref.url}) as a photo, but that file is a PDF; add it as a link instead.`;
+  } else if (restoring) {
+    sentence = `Revision ${restoring} has ${thing}, which is not a file of this venue any more; restore another revision, or edit the page and add the file again.`;
+  } else {
+    sentence = `${thing[0].toUpperCase()}${thing.slice(1)} is not a file of this venue; upload it here first, or remove it from the page.`;
+  }
+  return new HttpError(400, sentence, 'doc');
+}
+
+/**
+ * Refuses a document that points at a file which is not a stored file of this venue. Runs inside
+ * the save's write transaction, so a file deleted a moment earlier cannot slip through. A file of
+ * another venue and an id that does not exist get the same answer: the check must not tell anyone
+ * which ids exist elsewhere.
+ */
+export async function assertOwnFileRefs(tx: Tx, venueId: string, doc: PmNode, context: RefContext = {}): Promise<void> {
+  const refs = fileRefsInDoc(doc);
+  if (refs.length === 0) return;
+  const ids = [...new Set(refs.map((r) => r.fileId))];
+  const found = new Map<string, string>();
+  for (let i = 0; i < ids.length; i += LOOKUP_CHUNK) {
+    const rows = await tx
+      .select({ id: files.id, mime: files.mime })
+      .from(files)
+      .where(and(eq(files.venueId, venueId), inArray(files.id, ids.slice(i, i + LOOKUP_CHUNK))));
+    for (const row of rows) found.set(row.id, row.mime);
+  }
+  for (const ref of refs) {
+    const mime = found.get(ref.fileId);
+    if (mime === undefined) throw refused(ref, 'missing', context);
+    if (ref.kind === 'photo' && !mime.startsWith('image/')) throw refused(ref, 'pdf', context);
+  }
+}
