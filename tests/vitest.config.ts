@@ -11,6 +11,8 @@ export default defineConfig({
         test: {
           name: 'unit',
           root,
+          // Layers run one after another (cheapest first), each with its own worker count.
+          sequence: { groupOrder: 0 },
           include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
           environment: 'node',
         },
@@ -19,6 +21,7 @@ export default defineConfig({
         test: {
           name: 'integration',
           root,
+          sequence: { groupOrder: 1 },
           include: ['tests/integration/**/*.test.ts'],
           globalSetup: ['tests/setup/global-setup.ts'],
           testTimeout: 60_000,
@@ -31,6 +34,7 @@ export default defineConfig({
         test: {
           name: 'e2e',
           root,
+          sequence: { groupOrder: 2 },
           include: ['tests/e2e/**/*.test.ts'],
           globalSetup: ['tests/setup/global-setup.ts'],
           testTimeout: 90_000,

@@ -6,15 +6,20 @@ import * as schema from './schema';
 
 export type Db = LibSQLDatabase<typeof schema> & { $client: Client };
 
+export interface OpenOptions {
+  /** Connections in the client's pool; 1 for the writer, a few for readers. */
+  connections?: number;
+}
+
 /**
  * Opens the database with the settings the rest of the code relies on: WAL so readers never wait
  * for the writer, foreign keys enforced, and synchronous=FULL so a committed revision survives a
- * power cut at the desk. One connection: pragmas are per connection, and writes are serialised
- * by the write queue anyway.
+ * power cut at the desk. Those pragmas hold per connection, which is why the writer has exactly
+ * one connection and sets them once.
  */
-export async function openDb(url: string): Promise<Db> {
+export async function openDb(url: string, options: OpenOptions = {}): Promise<Db> {
   if (url.startsWith('file:')) mkdirSync(dirname(resolve(url.slice('file:'.length))), { recursive: true });
-  const client = createClient({ url, concurrency: 1, timeout: 5000 });
+  const client = createClient({ url, concurrency: options.connections ?? 1, timeout: 5000 });
   if (url.startsWith('file:')) {
     await client.execute('PRAGMA journal_mode = WAL');
     await client.execute('PRAGMA synchronous = FULL');

@@ -3,26 +3,44 @@ import { runMigrations } from '../db/migrate';
 import { getConfig } from './config';
 import { enqueueWrite } from './write-queue';
 
-let ready: Promise<Db> | undefined;
+interface Handles {
+  /** Pooled connections for reads: a read never waits for (or fails on) an open write. */
+  read: Db;
+  /** One connection, used only inside `writeTx`, so its pragmas always apply. */
+  write: Db;
+}
 
-/** The process's database, migrated before first use. */
-export function getDb(): Promise<Db> {
+const READ_CONNECTIONS = 4;
+let ready: Promise<Handles> | undefined;
+
+function handles(): Promise<Handles> {
   ready ??= (async () => {
-    const db = await openDb(getConfig().DATABASE_URL);
-    await enqueueWrite(() => runMigrations(db));
-    return db;
+    const url = getConfig().DATABASE_URL;
+    const write = await openDb(url, { connections: 1 });
+    await enqueueWrite(() => runMigrations(write));
+    // A libSQL server handles concurrency itself; only a local file needs a second client.
+    const read = url.startsWith('file:') ? await openDb(url, { connections: READ_CONNECTIONS }) : write;
+    return { read, write };
   })();
+  ready.catch(() => (ready = undefined));
   return ready;
+}
+
+/**
+ * The process's database for reading, migrated before first use. Never write through it:
+ * writes go through `writeTx`.
+ */
+export async function getDb(): Promise<Db> {
+  return (await handles()).read;
 }
 
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
 /**
  * Runs `work` in one write transaction, queued behind every other write of this process.
- * Inside `work` use only `tx`: the database has one connection and `tx` holds it.
- * Anything thrown rolls the whole transaction back.
+ * Inside `work` use only `tx`. Anything thrown rolls the whole transaction back.
  */
 export async function writeTx<T>(work: (tx: Tx) => Promise<T>): Promise<T> {
-  const db = await getDb();
-  return enqueueWrite(() => db.transaction(work));
+  const { write } = await handles();
+  return enqueueWrite(() => write.transaction(work));
 }

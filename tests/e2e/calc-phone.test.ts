@@ -67,8 +67,9 @@ describe('Delay and alignment', () => {
 
   it('remembers temperature and units on the next visit, but a shared link wins', async () => {
     const fresh = await open('/calc/delay');
-    expect(await fresh.getByTestId('temp').inputValue()).toBe('30');
-    expect(new URL(fresh.url()).searchParams.get('unit')).toBe('ft');
+    // The remembered values are applied after hydration, then written into the URL: wait for both.
+    await expect.poll(() => fresh.getByTestId('temp').inputValue()).toBe('30');
+    await expect.poll(() => new URL(fresh.url()).searchParams.get('unit')).toBe('ft');
     await fresh.close();
 
     // The sound-level screen shares the remembered length unit.
