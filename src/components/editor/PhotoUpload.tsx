@@ -1,5 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { UPLOAD_ACCEPT, type FileView } from '../../lib/schemas/file';
+import type { FileView } from '../../lib/schemas/file';
+import { UPLOAD_ACCEPT } from '../../lib/upload-limits';
 import { formatBytes } from '../files/format-bytes';
 import { uploadFile, UploadError } from '../files/upload-file';
 

@@ -1,4 +1,5 @@
-import { MAX_UPLOAD_BYTES, type FileView } from '../../lib/schemas/file';
+import type { FileView } from '../../lib/schemas/file';
+import { MAX_UPLOAD_BYTES } from '../../lib/upload-limits';
 
 /** An upload the server (or the network) refused; `message` is a sentence to show as it is. */
 export class UploadError extends Error {

@@ -1,12 +1,7 @@
 import { z } from 'zod';
+import { MAX_CAPTION_CHARS } from '../upload-limits';
 
-/** One uploaded file may be at most 25 MiB; the server refuses more before or while reading. */
-export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;
-
-/** What the file picker offers; on a phone `image/*` opens the camera roll and the camera. */
-export const UPLOAD_ACCEPT = 'image/*,application/pdf';
-
-export const MAX_CAPTION_CHARS = 500;
+export { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES, UPLOAD_ACCEPT } from '../upload-limits';
 
 const caption = z
   .string({ error: 'The caption must be text.' })
