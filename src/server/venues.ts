@@ -1,22 +1,12 @@
 import { asc, eq, sql } from 'drizzle-orm';
 import { memberships, pages, sections, venues } from '../db/schema';
 import type { VenueCreate } from '../lib/schemas/venue';
+import { DEFAULT_SECTIONS } from '../lib/default-sections';
 import { slugify } from '../lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx } from './db';
 import { HttpError } from './http';
 import type { SessionUser } from './session';
-
-export const DEFAULT_SECTIONS: { slug: string; title: string }[] = [
-  { slug: 'pa-system', title: 'PA system' },
-  { slug: 'control', title: 'Control and FOH' },
-  { slug: 'stage', title: 'Stage I/O and patch' },
-  { slug: 'monitors', title: 'Monitors' },
-  { slug: 'power', title: 'Power' },
-  { slug: 'rigging', title: 'Rigging' },
-  { slug: 'logistics', title: 'Logistics and access' },
-  { slug: 'contacts', title: 'Contacts' },
-];
 
 /** Venues this person may read, with their role there (admins see all, role null where not a member). */
 export async function listVenuesFor(user: SessionUser) {
