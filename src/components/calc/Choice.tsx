@@ -25,7 +25,7 @@ export default function Choice({ label, options, value, onChange, testId }: Prop
             type="button"
             aria-pressed={option.value === value}
             onClick={() => onChange(option.value)}
-            className={`min-h-11 min-w-11 flex-1 rounded-md px-3 text-base font-semibold ${
+            className={`min-h-11 min-w-[max(2.75rem,min-content)] flex-1 rounded-md px-2 text-base font-semibold sm:px-3 ${
               option.value === value ? 'bg-accent text-accent-fg' : 'text-fg hover:bg-surface'
             }`}
           >
