@@ -100,7 +100,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
         >
           {pickLabel ?? (single ? 'Choose a photo or PDF' : 'Choose photos or PDFs')}
         </label>
-        <span className="text-sm text-muted">JPEG, PNG, WebP, HEIC or PDF, up to 25 MiB each. Location data is removed from photos.</span>
+        <span className="text-sm text-muted">JPEG, PNG, WebP or PDF, up to 25 MiB each (export HEIC photos as JPEG). Location data is removed from photos.</span>
       </div>
 
       {queue.length > 0 && (

@@ -33,7 +33,7 @@ export function DiffView({ base, older, newer }: Props) {
       <p className="text-sm text-muted" data-testid="diff-stats">
         {changed ? (
           <>
-            From revision {older} to {newer}: <span className="font-semibold text-ok">{stats.added} words added</span>,{' '}
+            From revision {older} to {newer}: <span className="font-semibold text-ok">{stats.added} {stats.added === 1 ? 'word' : 'words'} added</span>,{' '}
             <span className="font-semibold text-danger">{stats.removed} removed</span>.
           </>
         ) : (
