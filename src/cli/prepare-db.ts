@@ -20,6 +20,12 @@ async function main() {
     console.log('Seeded the demo venues. Demo accounts (demo only — never use these on a real instance):');
     for (const a of result.accounts) console.log(`  ${a.email.padEnd(26)} ${a.role}`);
     console.log(`  password: the DEMO_PASSWORD setting${process.env.DEMO_PASSWORD ? '' : ' (default "throwline-demo")'}`);
+    if (config.SEED_DEMO_PHOTOS) {
+      const { seedDemoPhotos } = await import('../db/seed-photos');
+      const { demoPeople, demoVenues } = await import('../db/seed-data');
+      const added = await seedDemoPhotos(demoVenues[0].slug, demoPeople.engineer.email);
+      console.log(`  ${added} demo drawings uploaded into ${config.UPLOADS_DIR}`);
+    }
   }
   db.$client.close();
 }

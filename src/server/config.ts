@@ -22,6 +22,8 @@ export const ConfigSchema = z.object({
   UPLOADS_DIR: z.string().min(1, 'must be a folder path').default('./uploads'),
   AUTH_SECRET: z.string().min(32, 'must be at least 32 characters (e.g. `openssl rand -base64 33`)').optional(),
   SEED_DEMO: boolFlag.default(true),
+  /** With SEED_DEMO: also put two demo drawings through the upload pipeline into demo pages. */
+  SEED_DEMO_PHOTOS: boolFlag.default(true),
   DEMO_PASSWORD: z.string().min(8, 'must be at least 8 characters').default('throwline-demo'),
   SMTP_URL: z.string().regex(/^smtps?:\/\//, 'must be an smtp:// or smtps:// URL').optional(),
   /** Port of the local fake SMTP server started when SMTP_URL is unset (0 picks a free one). */

@@ -18,7 +18,7 @@ export default function setup() {
   rmSync(TEMPLATE_DB, { force: true });
   for (const suffix of ['-wal', '-shm']) rmSync(TEMPLATE_DB + suffix, { force: true });
   const result = spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/cli/prepare-db.ts'], {
-    env: { ...process.env, DATABASE_URL: `file:${TEMPLATE_DB}`, SEED_DEMO: '1', DEMO_PASSWORD: 'throwline-demo', AUTH_SECRET: 'x'.repeat(40) },
+    env: { ...process.env, DATABASE_URL: `file:${TEMPLATE_DB}`, SEED_DEMO: '1', SEED_DEMO_PHOTOS: '0', DEMO_PASSWORD: 'throwline-demo', AUTH_SECRET: 'x'.repeat(40) },
     encoding: 'utf8',
   });
   if (result.status !== 0) throw new Error(`Preparing the template database failed:\n${result.stdout}\n${result.stderr}`);

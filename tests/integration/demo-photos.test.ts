@@ -1,0 +1,48 @@
+import { spawnSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO, TMP_ROOT } from '../helpers/paths';
+import { startServer, type TestServer } from '../helpers/server';
+import { signIn } from '../helpers/session';
+
+/** `npm start` on an empty database seeds the demo drawings through the real upload pipeline. */
+let dir: string;
+let server: TestServer;
+
+beforeAll(async () => {
+  mkdirSync(TMP_ROOT, { recursive: true });
+  dir = mkdtempSync(join(TMP_ROOT, 'demo-photos-'));
+  const env = { ...process.env, DATABASE_URL: `file:${join(dir, 'throwline.db')}`, UPLOADS_DIR: join(dir, 'uploads'), SEED_DEMO: '1', SEED_DEMO_PHOTOS: '1', AUTH_SECRET: 'y'.repeat(40) };
+  const prepared = spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/cli/prepare-db.ts'], { env, encoding: 'utf8' });
+  expect(prepared.status, prepared.stderr).toBe(0);
+  expect(prepared.stdout).toContain('2 demo drawings uploaded');
+  server = await startServer({ DATABASE_URL: env.DATABASE_URL, UPLOADS_DIR: env.UPLOADS_DIR });
+});
+afterAll(async () => {
+  await server?.stop();
+  rmSync(dir, { recursive: true, force: true });
+});
+
+describe('demo drawings', () => {
+  it('are files of the first venue, each shown on its page, readable by the viewer', async () => {
+    const viewer = await signIn(server.url, DEMO.viewer);
+    const { files } = (await (await viewer.fetch('/api/venues/haverkin-hall/files')).json()) as { files: { caption: string; displayUrl: string }[] };
+    expect(files.map((f) => f.caption).sort()).toEqual(['Amp rack B after the B2 swap', 'Where the stage box tails land (house layout)']);
+
+    const html = await (await viewer.fetch('/venues/haverkin-hall/stage-box-patch')).text();
+    const src = html.match(/<img src="(\/files\/[A-Za-z0-9_-]+\/display)"/)?.[1];
+    expect(src).toBeDefined();
+    const image = await viewer.fetch(src!);
+    expect(image.status).toBe(200);
+    expect(image.headers.get('content-type')).toBe('image/webp');
+  });
+
+  it('were added as a new revision by the demo engineer, so history tells the story', async () => {
+    const engineer = await signIn(server.url, DEMO.engineer);
+    const { revisions } = (await (await engineer.fetch('/api/venues/haverkin-hall/pages/amp-racks/revisions')).json()) as {
+      revisions: { summary: string; author: { name: string } }[];
+    };
+    expect(revisions[0].summary).toBe('Added a front view of rack B');
+  });
+});
