@@ -45,4 +45,15 @@ describe('demo drawings', () => {
     };
     expect(revisions[0].summary).toBe('Added a front view of rack B');
   });
+
+  it('a drawing deleted after confirming shows as a note on its page, not a broken image', async () => {
+    const engineer = await signIn(server.url, DEMO.engineer);
+    const { files } = (await (await engineer.fetch('/api/venues/haverkin-hall/files')).json()) as { files: { id: string; caption: string }[] };
+    const rack = files.find((f) => f.caption.startsWith('Amp rack B'))!;
+    expect((await engineer.fetch(`/api/venues/haverkin-hall/files/${rack.id}`, { method: 'DELETE' })).status).toBe(409);
+    expect((await engineer.fetch(`/api/venues/haverkin-hall/files/${rack.id}?confirm=1`, { method: 'DELETE' })).status).toBeLessThan(300);
+    const html = await (await engineer.fetch('/venues/haverkin-hall/amp-racks')).text();
+    expect(html).toContain('Photo removed: Amp rack B after the B2 swap');
+    expect(html).not.toContain(`/files/${rack.id}`);
+  });
 });

@@ -13,6 +13,11 @@ export type BlockRenderer = (node: PmNode) => string;
 export interface RenderOptions {
   /** Renderers for custom block nodes (processor blocks), keyed by node type. */
   blocks?: Record<string, BlockRenderer>;
+  /**
+   * Whether an image's file can still be served. A photo deleted after a page used it is shown
+   * as a short note instead of a broken image.
+   */
+  isImageAvailable?: (src: string) => boolean;
 }
 
 const SIMPLE_BLOCKS: Record<string, string> = {
@@ -129,6 +134,9 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
       const src = node.attrs?.src;
       if (!isOwnFileUrl(src)) return ['', ''];
       const alt = typeof node.attrs?.alt === 'string' ? node.attrs.alt : '';
+      if (options.isImageAvailable && !options.isImageAvailable(src)) {
+        return [`<span class="missing-photo" role="note">Photo removed${alt ? `: ${escapeHtml(alt)}` : ''}</span>`, ''];
+      }
       const title = typeof node.attrs?.title === 'string' ? node.attrs.title : '';
       return [`<img${attr('src', src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
     }
