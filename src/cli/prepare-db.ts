@@ -18,7 +18,7 @@ async function main() {
   const result = await seedDemo(db, config.DEMO_PASSWORD);
   if (result.seeded) {
     console.log('Seeded the demo venues. Demo accounts (demo only — never use these on a real instance):');
-    for (const a of result.accounts) console.log(`  ${a.email.padEnd(26)} ${a.role}`);
+    for (const a of result.accounts) console.log(`  ${a.email.padEnd(28)} ${a.role}`);
     console.log(`  password: the DEMO_PASSWORD setting${process.env.DEMO_PASSWORD ? '' : ' (default "throwline-demo")'}`);
     if (config.SEED_DEMO_PHOTOS) {
       const { seedDemoPhotos } = await import('../db/seed-photos');

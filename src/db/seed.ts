@@ -91,6 +91,7 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
       { email: demoPeople.manager.email, role: `manager of both demo venues` },
       { email: demoPeople.engineer.email, role: `engineer at ${demoVenues[0].name}` },
       { email: demoPeople.viewer.email, role: `viewer at ${demoVenues[0].name}` },
+      { email: demoPeople.othermanager.email, role: `manager of ${demoVenues[1].name} only` },
     ],
   };
 }
