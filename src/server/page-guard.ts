@@ -20,6 +20,24 @@ export async function guardVenuePage(Astro: AstroGlobal, action: Action): Promis
   }
 }
 
+/**
+ * guardVenuePage, then loads one page of that venue with `load`; a missing page is the 404 page.
+ * Used by the read, edit and history views so each states only what it loads.
+ */
+export async function guardPageView<T>(
+  Astro: AstroGlobal,
+  action: Action,
+  load: (venueId: string, pageSlug: string | undefined) => Promise<T>,
+): Promise<{ ok: true; ctx: VenueContext & { user: SessionUser }; loaded: T } | { ok: false; response: Response | Promise<Response> }> {
+  const guard = await guardVenuePage(Astro, action);
+  if (!guard.ok) return guard;
+  try {
+    return { ok: true, ctx: guard.ctx, loaded: await load(guard.ctx.venue.id, Astro.params.page) };
+  } catch (err) {
+    return { ok: false, response: errorPageResponse(Astro, err) };
+  }
+}
+
 export function errorPageResponse(Astro: AstroGlobal, err: unknown): Response | Promise<Response> {
   if (!(err instanceof HttpError)) throw err;
   if (err.status === 401) {
