@@ -4,20 +4,24 @@ import { defineConfig } from 'vitest/config';
 const root = fileURLToPath(new URL('..', import.meta.url));
 
 export default defineConfig({
+  // The same "~/" alias as tsconfig.json's paths (Astro and tsx read it from there).
+  resolve: { alias: { '~': fileURLToPath(new URL('../src', import.meta.url)) } },
   test: {
     root,
     projects: [
       {
+        extends: true,
         test: {
           name: 'unit',
           root,
           // Layers run one after another (cheapest first), each with its own worker count.
           sequence: { groupOrder: 0 },
-          include: ['src/**/*.test.ts', 'tests/unit/**/*.test.ts'],
+          include: ['src/**/*.test.ts'],
           environment: 'node',
         },
       },
       {
+        extends: true,
         test: {
           name: 'integration',
           root,
@@ -31,6 +35,7 @@ export default defineConfig({
         },
       },
       {
+        extends: true,
         test: {
           name: 'e2e',
           root,

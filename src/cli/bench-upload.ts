@@ -28,7 +28,7 @@ interface Sample {
 }
 
 async function child(mode: Mode, path: string): Promise<void> {
-  const { processImage } = await import('../server/files/process-image');
+  const { processImage } = await import('~/server/files/process-image');
   // Load libvips and warm the code paths on a tiny image, so the sample is the work itself.
   const warm = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#888' } }).jpeg().toBuffer();
   await sharp(warm).jpeg().toBuffer();

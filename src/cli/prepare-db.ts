@@ -2,9 +2,9 @@
  * Migrates the database and, on an empty one with SEED_DEMO=1, seeds the demo venues.
  * Run by `npm start` before the server starts, and by the test setup for its template database.
  */
-import { openDb } from '../db/client';
-import { runMigrations } from '../db/migrate';
-import { ConfigError, getConfig } from '../server/config';
+import { openDb } from '~/db/client';
+import { runMigrations } from '~/db/migrate';
+import { ConfigError, getConfig } from '~/server/config';
 
 async function main() {
   const config = getConfig();
@@ -14,15 +14,15 @@ async function main() {
     db.$client.close();
     return;
   }
-  const { seedDemo } = await import('../db/seed');
+  const { seedDemo } = await import('~/server/demo/seed');
   const result = await seedDemo(db, config.DEMO_PASSWORD);
   if (result.seeded) {
     console.log('Seeded the demo venues. Demo accounts (demo only — never use these on a real instance):');
     for (const a of result.accounts) console.log(`  ${a.email.padEnd(28)} ${a.role}`);
     console.log(`  password: the DEMO_PASSWORD setting${process.env.DEMO_PASSWORD ? '' : ' (default "throwline-demo")'}`);
     if (config.SEED_DEMO_PHOTOS) {
-      const { seedDemoPhotos } = await import('../db/seed-photos');
-      const { demoPeople, demoVenues } = await import('../db/seed-data');
+      const { seedDemoPhotos } = await import('~/server/demo/seed-photos');
+      const { demoPeople, demoVenues } = await import('~/server/demo/seed-data');
       const added = await seedDemoPhotos(demoVenues[0].slug, demoPeople.engineer.email);
       console.log(`  ${added} demo drawings uploaded into ${config.UPLOADS_DIR}`);
     }

@@ -18,4 +18,12 @@ if (!existsSync(CHROMIUM)) {
   }
 }
 
+// The type check and the linter (which enforces the layers) run first: a broken boundary or a
+// type error fails CI before a single server starts.
+console.log('→ type check (astro sync + tsc)…');
+run(process.execPath, ['node_modules/astro/astro.js', 'sync']);
+run(process.execPath, ['node_modules/typescript/bin/tsc', '--noEmit', '-p', 'tsconfig.json']);
+console.log('→ lint (eslint, layer boundaries)…');
+run(process.execPath, ['node_modules/eslint/bin/eslint.js', '--max-warnings', '0', '.']);
+
 run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--config', 'tests/vitest.config.ts', ...process.argv.slice(2)]);

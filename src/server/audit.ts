@@ -1,4 +1,4 @@
-import { auditEvents } from '../db/schema';
+import { auditEvents } from '~/db/schema';
 import type { Tx } from './db';
 
 export interface AuditEntry {

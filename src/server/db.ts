@@ -1,5 +1,5 @@
-import { openDb, type Db } from '../db/client';
-import { runMigrations } from '../db/migrate';
+import { openDb, type Db } from '~/db/client';
+import { runMigrations } from '~/db/migrate';
 import { getConfig } from './config';
 import { enqueueWrite } from './write-queue';
 

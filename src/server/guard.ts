@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
-import { memberships, venues } from '../db/schema';
-import { can, refusalMessage, type Action, type Role, type VenueAccess } from '../lib/permissions';
+import { memberships, venues } from '~/db/schema';
+import { can, refusalMessage, type Action, type Role, type VenueAccess } from '~/lib/permissions';
 import { getDb } from './db';
 import { HttpError } from './http';
 import type { SessionUser } from './session';

@@ -1,5 +1,5 @@
-import type { PmNode } from '../lib/doc/types';
-import { validateDoc } from '../lib/doc/validate-doc';
+import type { PmNode } from '~/lib/doc/types';
+import { validateDoc } from '~/lib/doc/validate-doc';
 import { HttpError } from './http';
 
 /** The server's check of a page document (see validateDoc); a refusal is a 400 or 413 on `doc`. */

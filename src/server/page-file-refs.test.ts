@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { PmNode } from '../lib/doc/types';
+import type { PmNode } from '~/lib/doc/types';
 import { fileRefsInDoc } from './page-file-refs';
 
 const text = (t: string, href?: string): PmNode => ({ type: 'text', text: t, ...(href ? { marks: [{ type: 'bold' }, { type: 'link', attrs: { href } }] } : {}) });

@@ -1,6 +1,6 @@
 import { and, eq, inArray } from 'drizzle-orm';
-import { files } from '../db/schema';
-import type { PmNode } from '../lib/doc/types';
+import { files } from '~/db/schema';
+import type { PmNode } from '~/lib/doc/types';
 import type { Tx } from './db';
 import { fileIdsInDoc } from './files/file-usage';
 import { HttpError } from './http';

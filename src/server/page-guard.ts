@@ -1,5 +1,5 @@
 import type { AstroGlobal } from 'astro';
-import type { Action } from '../lib/permissions';
+import type { Action } from '~/lib/permissions';
 import { guardVenue, type VenueContext } from './guard';
 import { HttpError } from './http';
 import type { SessionUser } from './session';

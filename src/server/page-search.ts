@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { MATCH_CLOSE, MATCH_OPEN, snippetHtml, snippetParts } from '../lib/doc/marked-snippet';
-import { toFtsQuery } from '../lib/doc/search-query';
+import { MATCH_CLOSE, MATCH_OPEN, snippetHtml, snippetParts } from '~/lib/doc/marked-snippet';
+import { toFtsQuery } from '~/lib/doc/search-query';
 import { getDb } from './db';
 import type { SessionUser } from './session';
 

@@ -1,7 +1,7 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
-import { pages, sections } from '../db/schema';
-import type { SectionCreate, SectionUpdate } from '../lib/schemas/page';
-import { slugify } from '../lib/slug';
+import { pages, sections } from '~/db/schema';
+import type { SectionCreate, SectionUpdate } from '~/lib/schemas/page';
+import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Tx } from './db';
 import { HttpError } from './http';

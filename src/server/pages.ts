@@ -1,11 +1,11 @@
 import { and, eq, like, or } from 'drizzle-orm';
-import { pages, revisions, sections, users } from '../db/schema';
-import type { PmNode } from '../lib/doc/types';
-import type { PageCreate } from '../lib/schemas/page';
-import { slugify } from '../lib/slug';
+import { pages, revisions, sections, users } from '~/db/schema';
+import type { PmNode } from '~/lib/doc/types';
+import type { PageCreate } from '~/lib/schemas/page';
+import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Tx } from './db';
-import type { Action } from '../lib/permissions';
+import type { Action } from '~/lib/permissions';
 import { loadVenue, requirePermission, requireUser } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';

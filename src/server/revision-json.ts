@@ -1,5 +1,5 @@
-import type { revisions } from '../db/schema';
-import type { PmNode } from '../lib/doc/types';
+import type { revisions } from '~/db/schema';
+import type { PmNode } from '~/lib/doc/types';
 
 export interface AuthorJson {
   id: string | null;

@@ -1,7 +1,7 @@
 import { and, desc, eq } from 'drizzle-orm';
-import { pages, revisions, sections, users } from '../db/schema';
-import type { PmNode } from '../lib/doc/types';
-import type { PageSave, RestoreRequest } from '../lib/schemas/page';
+import { pages, revisions, sections, users } from '~/db/schema';
+import type { PmNode } from '~/lib/doc/types';
+import type { PageSave, RestoreRequest } from '~/lib/schemas/page';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Tx } from './db';
 import { HttpError } from './http';

@@ -1,6 +1,6 @@
 import { getToken } from '@auth/core/jwt';
 import { eq } from 'drizzle-orm';
-import { users } from '../db/schema';
+import { users } from '~/db/schema';
 import { getConfig } from './config';
 import { getDb } from './db';
 

@@ -1,8 +1,8 @@
 import { asc, eq, sql } from 'drizzle-orm';
-import { memberships, pages, sections, venues } from '../db/schema';
-import type { VenueCreate } from '../lib/schemas/venue';
-import { DEFAULT_SECTIONS } from '../lib/default-sections';
-import { slugify } from '../lib/slug';
+import { memberships, pages, sections, venues } from '~/db/schema';
+import type { VenueCreate } from '~/lib/schemas/venue';
+import { DEFAULT_SECTIONS } from '~/lib/default-sections';
+import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx } from './db';
 import { HttpError } from './http';

@@ -1,4 +1,4 @@
-import { cascadeResponse, logFrequencyGrid, type FilterSpec } from '../../src/lib/acoustics';
+import { cascadeResponse, logFrequencyGrid, type FilterSpec } from '~/lib/acoustics';
 
 function timeIt(work: () => void, minMs = 400): number {
   let runs = 0;

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { cascadeResponse, type FilterSpec } from '../../src/lib/acoustics';
+import { cascadeResponse, type FilterSpec } from '~/lib/acoustics';
 import { foreignRequests, launchBrowser, type Browser } from '../helpers/browser';
 import { startServer, type TestServer } from '../helpers/server';
 

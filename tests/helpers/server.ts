@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { copyFileSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
-import { SERVER_ENTRY } from '../../src/cli/build-if-stale.mjs';
+import { SERVER_ENTRY } from '~/cli/build-if-stale.mjs';
 import { ROOT, TEMPLATE_DB, TMP_ROOT } from './paths';
 
 export interface TestServer {

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { LIMITS } from '../../src/lib/acoustics';
-import { SplSumQuerySchema } from '../../src/lib/schemas/calc';
+import { LIMITS } from '~/lib/acoustics';
+import { SplSumQuerySchema } from '~/lib/schemas/calc';
 import { startServer, type TestServer } from '../helpers/server';
 
 /**

@@ -11,14 +11,14 @@ beforeAll(async () => {
 });
 afterAll(() => server?.stop());
 
-async function get(path: string): Promise<Record<string, any>> {
+async function get(path: string): Promise<Record<string, any>> /* eslint-disable-line @typescript-eslint/no-explicit-any -- answers are checked field by field below */ {
   const res = await fetch(`${server.url}/api/calc/${path}`);
   expect(res.status, `${path}: ${await res.clone().text()}`).toBe(200);
   expect(res.headers.get('content-type')).toMatch(/application\/json/);
   return res.json();
 }
 
-async function post(body: unknown): Promise<Record<string, any>> {
+async function post(body: unknown): Promise<Record<string, any>> /* eslint-disable-line @typescript-eslint/no-explicit-any -- answers are checked field by field below */ {
   const res = await fetch(`${server.url}/api/calc/response`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
   expect(res.status, await res.clone().text()).toBe(200);
   return res.json();

@@ -4,7 +4,7 @@ import { copyFileSync, mkdirSync, mkdtempSync, readdirSync, rmSync, statfsSync }
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { SERVER_ENTRY } from '../../src/cli/build-if-stale.mjs';
+import { SERVER_ENTRY } from '~/cli/build-if-stale.mjs';
 import { DEMO, ROOT, TEMPLATE_DB, TMP_ROOT } from '../helpers/paths';
 import { freePort } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';

@@ -4,7 +4,7 @@ import sharp from 'sharp';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
-import { anonymous, signIn, type Client } from '../helpers/session';
+import { signIn, type Client } from '../helpers/session';
 import {
   CAMERA_MODEL,
   HTML_PAGE,

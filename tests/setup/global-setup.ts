@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, rmSync } from 'node:fs';
-import { buildIfStale } from '../../src/cli/build-if-stale.mjs';
+import { buildIfStale } from '~/cli/build-if-stale.mjs';
 import { TEMPLATE_DB, TMP_ROOT } from '../helpers/paths';
 
 /**

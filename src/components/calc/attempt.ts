@@ -1,4 +1,4 @@
-import { parseDecimal } from '../../lib/schemas/decimal';
+import { parseDecimal } from '~/lib/schemas/decimal';
 
 export type Outcome<T> = { ok: true; value: T } | { ok: false; message: string };
 

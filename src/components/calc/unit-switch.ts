@@ -1,5 +1,5 @@
-import { METERS_PER_FOOT } from '../../lib/acoustics';
-import { parseDecimal } from '../../lib/schemas/decimal';
+import { METERS_PER_FOOT } from '~/lib/acoustics';
+import { parseDecimal } from '~/lib/schemas/decimal';
 
 /** Rewrites a typed value into another unit; text that is not a number yet is left alone. */
 export function convertText(text: string, convert: (value: number) => number, digits = 2): string {

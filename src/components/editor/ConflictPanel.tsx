@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef } from 'react';
-import { renderDocHtml } from '../../lib/doc/render-html';
+import { renderDocHtml } from '~/lib/doc/render-html';
 import type { RevisionInfo } from './page-api';
 
 interface Props {

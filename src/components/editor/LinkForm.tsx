@@ -1,6 +1,6 @@
 import type { Editor } from '@tiptap/react';
 import { useId, useState, type FormEvent } from 'react';
-import { isSafeLinkHref } from '../../lib/doc/safe-url';
+import { isSafeLinkHref } from '~/lib/doc/safe-url';
 
 /** Sets, changes or removes the link on the selected text; refuses what the server would refuse. */
 export function LinkForm({ editor, onClose }: { editor: Editor; onClose: () => void }) {

@@ -1,8 +1,8 @@
 import { EditorContent, useEditor } from '@tiptap/react';
 import { useEffect, useState } from 'react';
-import { docExtensions } from '../../lib/doc/extensions';
-import { docPlainText, renderDocHtml } from '../../lib/doc/render-html';
-import type { PmNode } from '../../lib/doc/types';
+import { docExtensions } from '~/lib/doc/extensions';
+import { docPlainText, renderDocHtml } from '~/lib/doc/render-html';
+import type { PmNode } from '~/lib/doc/types';
 import { ConflictPanel } from './ConflictPanel';
 import { copyRich } from './copy-text';
 import { DraftNotice } from './DraftNotice';

@@ -1,7 +1,7 @@
 import type { Editor } from '@tiptap/react';
 import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
-import type { FileView } from '../../lib/schemas/file';
+import type { FileView } from '~/lib/schemas/file';
 import { insertFile } from './insert-file';
 import { PhotoUpload } from './PhotoUpload';
 import { addToList, VenueFilePicker } from './VenueFilePicker';

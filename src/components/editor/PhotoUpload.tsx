@@ -1,8 +1,8 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import type { FileView } from '../../lib/schemas/file';
-import { UPLOAD_ACCEPT } from '../../lib/upload-limits';
-import { formatBytes } from '../files/format-bytes';
-import { uploadFile, UploadError } from '../files/upload-file';
+import type { FileView } from '~/lib/schemas/file';
+import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
+import { formatBytes } from '~/components/files/format-bytes';
+import { uploadFile, UploadError } from '~/components/files/upload-file';
 
 type Stage = 'empty' | 'ready' | 'sending' | 'processing' | 'done' | 'error';
 

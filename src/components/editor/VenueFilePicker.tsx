@@ -1,5 +1,5 @@
 import type { KeyedMutator } from 'swr';
-import type { FileView } from '../../lib/schemas/file';
+import type { FileView } from '~/lib/schemas/file';
 
 interface Props {
   files: FileView[] | undefined;

@@ -1,4 +1,4 @@
-import type { PmNode } from '../../lib/doc/types';
+import type { PmNode } from '~/lib/doc/types';
 
 /**
  * Unsaved text kept in this browser's localStorage while someone types, one entry per venue,

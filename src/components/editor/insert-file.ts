@@ -1,5 +1,5 @@
 import type { Editor } from '@tiptap/react';
-import type { FileView } from '../../lib/schemas/file';
+import type { FileView } from '~/lib/schemas/file';
 
 /**
  * Puts a stored file into the page at the cursor: a photo as an image block (its display size,

@@ -1,4 +1,4 @@
-import type { PmNode } from '../../lib/doc/types';
+import type { PmNode } from '~/lib/doc/types';
 
 /** The revision that won when a save is refused with 409, as the server sends it. */
 export interface RevisionInfo {

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import type { FileView, PageRef } from '../../lib/schemas/file';
+import type { FileView, PageRef } from '~/lib/schemas/file';
 
 interface Props {
   file: FileView;

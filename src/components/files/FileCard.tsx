@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import type { FileView } from '../../lib/schemas/file';
+import type { FileView } from '~/lib/schemas/file';
 import { ConfirmDelete } from './ConfirmDelete';
 import { formatBytes } from './format-bytes';
 

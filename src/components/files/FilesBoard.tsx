@@ -1,5 +1,5 @@
 import useSWR from 'swr';
-import type { FileView, PageRef } from '../../lib/schemas/file';
+import type { FileView, PageRef } from '~/lib/schemas/file';
 import { FileCard } from './FileCard';
 import { Uploader } from './Uploader';
 

@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { FileView } from '../../lib/schemas/file';
+import type { FileView } from '~/lib/schemas/file';
 import { formatBytes } from './format-bytes';
 
 export interface QueuedUpload {

@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import type { FileView, PageRef } from '../../lib/schemas/file';
-import { UPLOAD_ACCEPT } from '../../lib/upload-limits';
+import type { FileView, PageRef } from '~/lib/schemas/file';
+import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
 import { uploadFile, UploadError } from './upload-file';
 

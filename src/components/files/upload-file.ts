@@ -1,5 +1,5 @@
-import type { FileView } from '../../lib/schemas/file';
-import { MAX_UPLOAD_BYTES } from '../../lib/upload-limits';
+import type { FileView } from '~/lib/schemas/file';
+import { MAX_UPLOAD_BYTES } from '~/lib/upload-limits';
 
 /** An upload the server (or the network) refused; `message` is a sentence to show as it is. */
 export class UploadError extends Error {

@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'react';
 import useSWR from 'swr';
-import { diffStats, foldUnchanged, wordDiff } from '../../lib/doc/word-diff';
+import { diffStats, foldUnchanged, wordDiff } from '~/lib/doc/word-diff';
 import { fetchJson } from './fetch-json';
 import type { RevisionFull } from './types';
 

@@ -4,7 +4,7 @@
  * names the parameter and shows a working example.
  */
 import { z } from 'zod';
-import { formatNumber } from '../acoustics/guards';
+import { formatNumber } from '~/lib/acoustics/guards';
 import { MAX_NUMBER_CHARS, parseDecimal, type NumberProblem } from './decimal';
 
 export { MAX_NUMBER_CHARS, parseDecimal, type NumberProblem };

@@ -4,8 +4,8 @@
  * every message names the filter by its position so a person can find it in a long chain.
  */
 import { z } from 'zod';
-import { FILTER_TYPES, LIMITS, type FilterSpec } from '../acoustics';
-import { formatNumber } from '../acoustics/guards';
+import { FILTER_TYPES, LIMITS, type FilterSpec } from '~/lib/acoustics';
+import { formatNumber } from '~/lib/acoustics/guards';
 import { outOfRange, shown } from './calc-params';
 
 const FAMILIES = ['butterworth', 'linkwitz-riley'] as const;

@@ -4,7 +4,7 @@
  * and each refusal is a sentence naming the parameter, its unit and an example that works.
  */
 import { z } from 'zod';
-import { LIMITS, METERS_PER_FOOT, octavesFromQ, type BandInput, type BandFraction } from '../acoustics';
+import { LIMITS, METERS_PER_FOOT, octavesFromQ, type BandInput, type BandFraction } from '~/lib/acoustics';
 import { checkRange, choiceParam, numberListParam, numberParam, shown, type Bounds } from './calc-params';
 export { ResponseBodySchema, type ResponseBody } from './calc-response';
 

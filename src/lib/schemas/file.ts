@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { MAX_CAPTION_CHARS } from '../upload-limits';
+import { MAX_CAPTION_CHARS } from '~/lib/upload-limits';
 
-export { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES, UPLOAD_ACCEPT } from '../upload-limits';
+export { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES, UPLOAD_ACCEPT } from '~/lib/upload-limits';
 
 const caption = z
   .string({ error: 'The caption must be text.' })

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { SLUG_PATTERN } from '../slug';
+import { SLUG_PATTERN } from '~/lib/slug';
 
 /**
  * Request bodies for pages, revisions, sections and search, shared by the editor island and the

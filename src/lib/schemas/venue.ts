@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { SLUG_PATTERN } from '../slug';
+import { SLUG_PATTERN } from '~/lib/slug';
 
 export const VenueCreateSchema = z
   .object({

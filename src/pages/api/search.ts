@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { SearchQuerySchema } from '../../lib/schemas/page';
-import { requireUser } from '../../server/guard';
-import { handle, json, parseWith, searchParamsObject } from '../../server/http';
-import { searchPages } from '../../server/page-search';
+import { SearchQuerySchema } from '~/lib/schemas/page';
+import { requireUser } from '~/server/guard';
+import { handle, json, parseWith, searchParamsObject } from '~/server/http';
+import { searchPages } from '~/server/page-search';
 
 /** Hits across the pages this person may read: venue, page, section and a marked snippet. */
 export const GET: APIRoute = ({ locals, url }) =>

@@ -1,6 +1,6 @@
 import type { APIRoute } from 'astro';
 import { getCollection } from 'astro:content';
-import { CALCULATORS, OFFLINE_STATIC } from '../../components/calc/calculators';
+import { CALCULATORS, OFFLINE_STATIC } from '~/components/calc/calculators';
 
 /** What the service worker saves on install: every calculator screen, every guide, the app icons. */
 export const GET: APIRoute = async () => {

@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { users } from '../../db/schema';
-import { getDb } from '../db';
+import { users } from '~/db/schema';
+import { getDb } from '~/server/db';
 import { burnVerifyTime, verifyPassword } from './password';
 
 export const CredentialsSchema = z.object({

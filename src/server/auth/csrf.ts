@@ -1,5 +1,5 @@
 import { Auth } from '@auth/core';
-import authConfig from '../../auth.config';
+import authConfig from '~/auth.config';
 
 /**
  * An Auth.js CSRF token for a server-rendered form (sign-in, sign-out), with the cookie that

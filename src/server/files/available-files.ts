@@ -1,6 +1,6 @@
 import { and, eq, inArray } from 'drizzle-orm';
-import { files } from '../../db/schema';
-import { getDb } from '../db';
+import { files } from '~/db/schema';
+import { getDb } from '~/server/db';
 
 /** Of these file ids, the ones this venue can still serve (a row exists and its bytes are on disk). */
 export async function availableFileIds(venueId: string, ids: Iterable<string>): Promise<Set<string>> {

@@ -1,11 +1,11 @@
 import { and, desc, eq, or } from 'drizzle-orm';
 import { rm } from 'node:fs/promises';
-import { files, pages, users } from '../../db/schema';
-import type { FileView, PageRef } from '../../lib/schemas/file';
-import { recordAudit } from '../audit';
-import { getDb, writeTx, type Tx } from '../db';
-import { HttpError } from '../http';
-import type { SessionUser } from '../session';
+import { files, pages, users } from '~/db/schema';
+import type { FileView, PageRef } from '~/lib/schemas/file';
+import { recordAudit } from '~/server/audit';
+import { getDb, writeTx, type Tx } from '~/server/db';
+import { HttpError } from '~/server/http';
+import type { SessionUser } from '~/server/session';
 import { fileUsage, type Reader } from './file-usage';
 import { ensureStorageReady } from './storage-sweep';
 import { storedPath } from './storage-paths';

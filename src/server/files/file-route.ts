@@ -1,5 +1,5 @@
 import type { APIContext } from 'astro';
-import { handle } from '../http';
+import { handle } from '~/server/http';
 import { fileResponse, loadReadableFile, parseVariant } from './serve-file';
 
 /**

@@ -1,9 +1,9 @@
 import { and, eq, like } from 'drizzle-orm';
 import type { ResultSet } from '@libsql/client';
 import type { BaseSQLiteDatabase } from 'drizzle-orm/sqlite-core';
-import { pages, revisions } from '../../db/schema';
-import type * as schema from '../../db/schema';
-import type { PageRef } from '../../lib/schemas/file';
+import { pages, revisions } from '~/db/schema';
+import type * as schema from '~/db/schema';
+import type { PageRef } from '~/lib/schemas/file';
 
 /** The database or a transaction: reads that must also work inside `writeTx`. */
 export type Reader = BaseSQLiteDatabase<'async', ResultSet, typeof schema>;

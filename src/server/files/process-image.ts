@@ -1,5 +1,5 @@
 import sharp from 'sharp';
-import { HttpError } from '../http';
+import { HttpError } from '~/server/http';
 import { withImageSlot } from './image-slots';
 import type { ImageFormat } from './sniff-type';
 

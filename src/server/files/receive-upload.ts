@@ -4,8 +4,8 @@ import { createWriteStream } from 'node:fs';
 import { mkdir, rm } from 'node:fs/promises';
 import { Transform, type Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES } from '../../lib/schemas/file';
-import { HttpError } from '../http';
+import { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES } from '~/lib/schemas/file';
+import { HttpError } from '~/server/http';
 import { asStorageError } from './storage-errors';
 import { newTempPath, tempDir } from './storage-paths';
 

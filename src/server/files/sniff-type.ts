@@ -1,6 +1,6 @@
 import { open } from 'node:fs/promises';
 import { fileTypeFromBuffer } from 'file-type';
-import { HttpError } from '../http';
+import { HttpError } from '~/server/http';
 
 export type ImageFormat = 'jpeg' | 'png' | 'webp' | 'heif';
 export type AcceptedType = { kind: 'image'; format: ImageFormat; detected: string } | { kind: 'pdf' };

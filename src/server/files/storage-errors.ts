@@ -1,4 +1,4 @@
-import { HttpError } from '../http';
+import { HttpError } from '~/server/http';
 
 const FULL_CODES = new Set(['ENOSPC', 'EDQUOT', 'EFBIG']);
 

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { join, resolve } from 'node:path';
-import { getConfig } from '../config';
+import { getConfig } from '~/server/config';
 
 /**
  * Where uploads live. Stored names are made only by this module from a SHA-256 hex digest, and

@@ -1,8 +1,8 @@
 import { mkdir, readdir, rm } from 'node:fs/promises';
 import { join } from 'node:path';
 import { eq } from 'drizzle-orm';
-import { files } from '../../db/schema';
-import { getDb, writeTx } from '../db';
+import { files } from '~/db/schema';
+import { getDb, writeTx } from '~/server/db';
 import { asStorageError } from './storage-errors';
 import { STORED_NAME, tempDir, uploadsDir } from './storage-paths';
 

@@ -1,6 +1,6 @@
 import { join } from 'node:path';
 import nodemailer, { type Transporter } from 'nodemailer';
-import { getConfig } from '../config';
+import { getConfig } from '~/server/config';
 import { startFakeSmtp } from './fake-smtp';
 
 export const FROM_ADDRESS = 'Throwline <no-reply@throwline.invalid>';

@@ -1,10 +1,10 @@
-import { octaveBands, type BandFraction } from '../../../lib/acoustics';
-import Choice from '../Choice';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result from '../Result';
-import { attempt, num } from '../attempt';
-import { hz, sig } from '../format';
+import { octaveBands, type BandFraction } from '~/lib/acoustics';
+import Choice from '~/components/calc/Choice';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { hz, sig } from '~/components/calc/format';
 import { GUIDE, type BandPanelProps } from './band-state';
 
 const FRACTIONS = [

@@ -1,4 +1,4 @@
-import { useQueryState } from '../use-query-state';
+import { useQueryState } from '~/components/calc/use-query-state';
 import BandTablePanel from './BandTablePanel';
 import NotePanel from './NotePanel';
 import WidthPanel from './WidthPanel';

@@ -1,10 +1,10 @@
-import { frequencyFromNote, noteFromFrequency } from '../../../lib/acoustics';
-import Choice from '../Choice';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result, { Figure } from '../Result';
-import { attempt, num } from '../attempt';
-import { fixed, sig } from '../format';
+import { frequencyFromNote, noteFromFrequency } from '~/lib/acoustics';
+import Choice from '~/components/calc/Choice';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result, { Figure } from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { fixed, sig } from '~/components/calc/format';
 import { GUIDE, type BandPanelProps } from './band-state';
 
 /** Nearest equal-tempered note of a frequency (with cents), or the frequency of a note. */

@@ -1,10 +1,10 @@
-import Choice from '../Choice';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result, { Figure } from '../Result';
-import SelectField from '../SelectField';
-import { fixed } from '../format';
-import { SAMPLE_RATES, convertText, lengthTo, temperatureTo } from '../unit-switch';
+import Choice from '~/components/calc/Choice';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result, { Figure } from '~/components/calc/Result';
+import SelectField from '~/components/calc/SelectField';
+import { fixed } from '~/components/calc/format';
+import { SAMPLE_RATES, convertText, lengthTo, temperatureTo } from '~/components/calc/unit-switch';
 import { GUIDE, type DelayPanelProps } from './delay-state';
 
 /** Air temperature and the units every other delay panel speaks. */

@@ -1,6 +1,6 @@
-import { celsiusFromFahrenheit, speedOfSound } from '../../../lib/acoustics';
-import { attempt, num } from '../attempt';
-import { useQueryState } from '../use-query-state';
+import { celsiusFromFahrenheit, speedOfSound } from '~/lib/acoustics';
+import { attempt, num } from '~/components/calc/attempt';
+import { useQueryState } from '~/components/calc/use-query-state';
 import AirPanel from './AirPanel';
 import FillPanel from './FillPanel';
 import SubTopPanel from './SubTopPanel';

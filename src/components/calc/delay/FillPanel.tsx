@@ -1,10 +1,10 @@
-import { fillDelayMs, msToSamples } from '../../../lib/acoustics';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result, { Figure } from '../Result';
-import { attempt, num } from '../attempt';
-import { fixed } from '../format';
-import { toMeters } from '../unit-switch';
+import { fillDelayMs, msToSamples } from '~/lib/acoustics';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result, { Figure } from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { fixed } from '~/components/calc/format';
+import { toMeters } from '~/components/calc/unit-switch';
 import { GUIDE, type DelayPanelProps } from './delay-state';
 
 /** Delay for a fill loudspeaker so the main arrives first at the listener. */

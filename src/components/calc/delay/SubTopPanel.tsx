@@ -1,9 +1,9 @@
-import { msToSamples, subToTopOffset } from '../../../lib/acoustics';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result, { Figure } from '../Result';
-import { attempt, num } from '../attempt';
-import { fixed } from '../format';
+import { msToSamples, subToTopOffset } from '~/lib/acoustics';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result, { Figure } from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { fixed } from '~/components/calc/format';
 import { GUIDE, type DelayPanelProps } from './delay-state';
 
 /** Time offset between sub and top from the phase difference measured at the crossover. */

@@ -1,11 +1,11 @@
-import { delayMs, distanceFromMs, msToSamples, samplesToMs } from '../../../lib/acoustics';
-import Choice from '../Choice';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result, { Figure } from '../Result';
-import { attempt, num } from '../attempt';
-import { fixed } from '../format';
-import { fromMeters, toMeters } from '../unit-switch';
+import { delayMs, distanceFromMs, msToSamples, samplesToMs } from '~/lib/acoustics';
+import Choice from '~/components/calc/Choice';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result, { Figure } from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { fixed } from '~/components/calc/format';
+import { fromMeters, toMeters } from '~/components/calc/unit-switch';
 import { GUIDE, type DelayPanelProps } from './delay-state';
 
 /** Distance ↔ milliseconds ↔ samples, from either end. */

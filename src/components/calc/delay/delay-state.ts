@@ -1,5 +1,5 @@
-import type { QueryState } from '../use-query-state';
-import type { Outcome } from '../attempt';
+import type { QueryState } from '~/components/calc/use-query-state';
+import type { Outcome } from '~/components/calc/attempt';
 
 export const DELAY_DEFAULTS: QueryState = {
   temp: '20',

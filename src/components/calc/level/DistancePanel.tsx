@@ -1,11 +1,11 @@
-import { levelAtDistance } from '../../../lib/acoustics';
-import Choice from '../Choice';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result, { Figure } from '../Result';
-import { attempt, num } from '../attempt';
-import { fixed } from '../format';
-import { convertText, lengthTo, toMeters } from '../unit-switch';
+import { levelAtDistance } from '~/lib/acoustics';
+import Choice from '~/components/calc/Choice';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result, { Figure } from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { fixed } from '~/components/calc/format';
+import { convertText, lengthTo, toMeters } from '~/components/calc/unit-switch';
 import { GUIDE, type LevelPanelProps } from './level-state';
 
 /** Level at a new distance from a point or line source, in metres or feet. */

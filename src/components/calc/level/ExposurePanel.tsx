@@ -1,9 +1,9 @@
-import { EXPOSURE_CAUTION, nioshRecommendedHours, oshaPermissibleHours } from '../../../lib/acoustics';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import Result from '../Result';
-import { attempt, num } from '../attempt';
-import { duration } from '../format';
+import { EXPOSURE_CAUTION, nioshRecommendedHours, oshaPermissibleHours } from '~/lib/acoustics';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import Result from '~/components/calc/Result';
+import { attempt, num } from '~/components/calc/attempt';
+import { duration } from '~/components/calc/format';
 import { GUIDE, type LevelPanelProps } from './level-state';
 
 /** The two rules are computed and shown separately, each with its own criterion and exchange rate. */

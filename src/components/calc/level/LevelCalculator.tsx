@@ -1,4 +1,4 @@
-import { useQueryState } from '../use-query-state';
+import { useQueryState } from '~/components/calc/use-query-state';
 import BackgroundPanel from './BackgroundPanel';
 import DistancePanel from './DistancePanel';
 import ExposurePanel from './ExposurePanel';

@@ -1,4 +1,4 @@
-import type { QueryState } from '../use-query-state';
+import type { QueryState } from '~/components/calc/use-query-state';
 
 export const LEVEL_DEFAULTS: QueryState = {
   mode: 'incoherent',

@@ -1,6 +1,6 @@
-import { LIMITS } from '../../../lib/acoustics';
-import NumberField from '../NumberField';
-import SelectField from '../SelectField';
+import { LIMITS } from '~/lib/acoustics';
+import NumberField from '~/components/calc/NumberField';
+import SelectField from '~/components/calc/SelectField';
 import { clean, kindOf, retype, type FilterDraft } from './filter-draft';
 
 const TYPES = [

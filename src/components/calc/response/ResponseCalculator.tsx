@@ -1,10 +1,10 @@
 import { useRef } from 'react';
-import { LIMITS, cascadeResponse, logFrequencyGrid, type CascadeResponse } from '../../../lib/acoustics';
-import Panel from '../Panel';
-import SelectField from '../SelectField';
-import { attempt, num } from '../attempt';
-import { SAMPLE_RATES } from '../unit-switch';
-import { useQueryState } from '../use-query-state';
+import { LIMITS, cascadeResponse, logFrequencyGrid, type CascadeResponse } from '~/lib/acoustics';
+import Panel from '~/components/calc/Panel';
+import SelectField from '~/components/calc/SelectField';
+import { attempt, num } from '~/components/calc/attempt';
+import { SAMPLE_RATES } from '~/components/calc/unit-switch';
+import { useQueryState } from '~/components/calc/use-query-state';
 import FilterRow from './FilterRow';
 import ResponsePlot from './ResponsePlot';
 import { DEFAULT_CHAIN, decodeFilters, encodeFilters, toSpec, type FilterDraft } from './filter-draft';

@@ -1,5 +1,5 @@
-import { FILTER_TYPES, LIMITS, type FilterSpec } from '../../../lib/acoustics';
-import { num } from '../attempt';
+import { FILTER_TYPES, LIMITS, type FilterSpec } from '~/lib/acoustics';
+import { num } from '~/components/calc/attempt';
 
 /** One filter as typed: text fields, so half-typed numbers survive and the URL stays faithful. */
 export interface FilterDraft {

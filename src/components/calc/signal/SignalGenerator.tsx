@@ -1,9 +1,9 @@
 import { useEffect, useRef, useState } from 'react';
-import Choice from '../Choice';
-import NumberField from '../NumberField';
-import Panel from '../Panel';
-import { attempt, num } from '../attempt';
-import { useQueryState } from '../use-query-state';
+import Choice from '~/components/calc/Choice';
+import NumberField from '~/components/calc/NumberField';
+import Panel from '~/components/calc/Panel';
+import { attempt, num } from '~/components/calc/attempt';
+import { useQueryState } from '~/components/calc/use-query-state';
 import { LEVEL_MAX_DBFS, LEVEL_MIN_DBFS, SignalPlayer, START_LEVEL_DBFS, type SignalKind } from './signal-player';
 
 const GUIDE = '/calc/guide/test-signal';
@@ -41,9 +41,10 @@ export default function SignalGenerator({ search }: { search: string }) {
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
   useEffect(() => player.current?.setLevel(level), [level]);
+  const sineHz = sine.ok ? sine.value : null;
   useEffect(() => {
-    if (sine.ok) player.current?.setFrequency(sine.value);
-  }, [sine.ok, sine.ok && sine.value]);
+    if (sineHz !== null) player.current?.setFrequency(sineHz);
+  }, [sineHz]);
 
   const start = async (which: SignalKind) => {
     setProblem('');

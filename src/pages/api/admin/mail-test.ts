@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
-import { requirePermission, requireUser } from '../../../server/guard';
-import { HttpError, handle, json } from '../../../server/http';
-import { sendMail } from '../../../server/mail/mailer';
+import { requirePermission, requireUser } from '~/server/guard';
+import { HttpError, handle, json } from '~/server/http';
+import { sendMail } from '~/server/mail/mailer';
 
 /**
  * Sends a test message to the signed-in administrator, to check the mail settings end to end.

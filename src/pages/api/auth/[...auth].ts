@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
-import { AstroAuth } from '../../../server/auth/astro-auth.mjs';
-import { clearSignInFailures, recordSignInFailure, signInRetryAfter } from '../../../server/auth/rate-limit';
-import { json } from '../../../server/http';
+import { AstroAuth } from '~/server/auth/astro-auth.mjs';
+import { clearSignInFailures, recordSignInFailure, signInRetryAfter } from '~/server/auth/rate-limit';
+import { json } from '~/server/http';
 
 export const prerender = false;
 

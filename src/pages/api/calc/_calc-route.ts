@@ -5,7 +5,7 @@
  */
 import type { APIRoute } from 'astro';
 import type { z } from 'zod';
-import { HttpError, handle, json, searchParamsObject } from '../../../server/http';
+import { HttpError, handle, json, searchParamsObject } from '~/server/http';
 
 /** Pure answers: a shared cache may keep them briefly. */
 const CACHEABLE = { 'cache-control': 'public, max-age=300' };

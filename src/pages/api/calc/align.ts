@@ -1,5 +1,5 @@
-import { fillDelayMs, speedOfSound } from '../../../lib/acoustics';
-import { AlignQuerySchema } from '../../../lib/schemas/calc';
+import { fillDelayMs, speedOfSound } from '~/lib/acoustics';
+import { AlignQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /**

@@ -1,5 +1,5 @@
-import { backgroundCorrection } from '../../../lib/acoustics';
-import { BackgroundQuerySchema } from '../../../lib/schemas/calc';
+import { backgroundCorrection } from '~/lib/acoustics';
+import { BackgroundQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** The source alone from a total and a background reading; refused when they are too close. */

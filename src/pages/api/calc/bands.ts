@@ -1,5 +1,5 @@
-import { octaveBands } from '../../../lib/acoustics';
-import { BandsQuerySchema } from '../../../lib/schemas/calc';
+import { octaveBands } from '~/lib/acoustics';
+import { BandsQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** Fractional-octave bands per IEC 61260-1 (base 10), exact and nominal midbands with edges. */

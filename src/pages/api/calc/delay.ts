@@ -1,5 +1,5 @@
-import { delayMs, msToSamples, speedOfSound } from '../../../lib/acoustics';
-import { DelayQuerySchema } from '../../../lib/schemas/calc';
+import { delayMs, msToSamples, speedOfSound } from '~/lib/acoustics';
+import { DelayQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** Time of flight over a distance at an air temperature, and the same in samples at a rate. */

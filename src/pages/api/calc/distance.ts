@@ -1,5 +1,5 @@
-import { levelAtDistance } from '../../../lib/acoustics';
-import { DistanceQuerySchema } from '../../../lib/schemas/calc';
+import { levelAtDistance } from '~/lib/acoustics';
+import { DistanceQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** Free-field level at a new distance from a point or line source. */

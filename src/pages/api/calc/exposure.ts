@@ -1,5 +1,5 @@
-import { EXPOSURE_CAUTION, nioshRecommendedHours, oshaPermissibleHours } from '../../../lib/acoustics';
-import { ExposureQuerySchema } from '../../../lib/schemas/calc';
+import { EXPOSURE_CAUTION, nioshRecommendedHours, oshaPermissibleHours } from '~/lib/acoustics';
+import { ExposureQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** The two US rules are answered one at a time, never blended, and always with the caution. */

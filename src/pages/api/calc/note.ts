@@ -1,5 +1,5 @@
-import { frequencyFromNote, noteFromFrequency } from '../../../lib/acoustics';
-import { NoteQuerySchema } from '../../../lib/schemas/calc';
+import { frequencyFromNote, noteFromFrequency } from '~/lib/acoustics';
+import { NoteQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /**

@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
-import { cascadeResponse, logFrequencyGrid } from '../../../lib/acoustics';
-import { ResponseBodySchema } from '../../../lib/schemas/calc';
-import { handle, json, readJsonBody } from '../../../server/http';
+import { cascadeResponse, logFrequencyGrid } from '~/lib/acoustics';
+import { ResponseBodySchema } from '~/lib/schemas/calc';
+import { handle, json, readJsonBody } from '~/server/http';
 import { parseCalc, refuseRangeErrors } from './_calc-route';
 
 /** Default grid points: smooth on a phone-width plot, small to send. */

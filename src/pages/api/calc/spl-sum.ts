@@ -1,5 +1,5 @@
-import { coherentSum, incoherentSum } from '../../../lib/acoustics';
-import { SplSumQuerySchema } from '../../../lib/schemas/calc';
+import { coherentSum, incoherentSum } from '~/lib/acoustics';
+import { SplSumQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** Sum of levels: by power for unrelated sources, by pressure with phases for the same signal. */

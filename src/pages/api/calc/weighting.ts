@@ -1,5 +1,5 @@
-import { weightingDb } from '../../../lib/acoustics';
-import { WeightingQuerySchema } from '../../../lib/schemas/calc';
+import { weightingDb } from '~/lib/acoustics';
+import { WeightingQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** A, C or Z weighting at one frequency per IEC 61672-1. */

@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { VenueCreateSchema } from '../../../lib/schemas/venue';
-import { requirePermission, requireUser } from '../../../server/guard';
-import { handle, json, parseWith, readJsonBody } from '../../../server/http';
-import { createVenue, listVenuesFor } from '../../../server/venues';
+import { VenueCreateSchema } from '~/lib/schemas/venue';
+import { requirePermission, requireUser } from '~/server/guard';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { createVenue, listVenuesFor } from '~/server/venues';
 
 export const GET: APIRoute = ({ locals }) =>
   handle(async () => {

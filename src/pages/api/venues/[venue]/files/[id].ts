@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { FileCaptionSchema } from '../../../../../lib/schemas/file';
-import { deleteFile, loadVenueFile, updateCaption } from '../../../../../server/files/file-records';
-import { guardVenue } from '../../../../../server/guard';
-import { handle, json, parseWith, readJsonBody } from '../../../../../server/http';
+import { FileCaptionSchema } from '~/lib/schemas/file';
+import { deleteFile, loadVenueFile, updateCaption } from '~/server/files/file-records';
+import { guardVenue } from '~/server/guard';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {

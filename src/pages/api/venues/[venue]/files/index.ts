@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { listVenueFiles } from '../../../../../server/files/file-records';
-import { saveUpload } from '../../../../../server/files/save-upload';
-import { guardVenue } from '../../../../../server/guard';
-import { handle, json } from '../../../../../server/http';
+import { listVenueFiles } from '~/server/files/file-records';
+import { saveUpload } from '~/server/files/save-upload';
+import { guardVenue } from '~/server/guard';
+import { handle, json } from '~/server/http';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {

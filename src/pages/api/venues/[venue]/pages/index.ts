@@ -1,9 +1,9 @@
 import type { APIRoute } from 'astro';
-import { PageCreateSchema } from '../../../../../lib/schemas/page';
-import { guardVenue } from '../../../../../server/guard';
-import { handle, json, parseWith, readJsonBody } from '../../../../../server/http';
-import { createPage } from '../../../../../server/pages';
-import { listPages } from '../../../../../server/venues';
+import { PageCreateSchema } from '~/lib/schemas/page';
+import { guardVenue } from '~/server/guard';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { createPage } from '~/server/pages';
+import { listPages } from '~/server/venues';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {

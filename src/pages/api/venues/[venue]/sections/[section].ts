@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { SectionUpdateSchema } from '../../../../../lib/schemas/page';
-import { guardVenue } from '../../../../../server/guard';
-import { handle, json, parseWith, readJsonBody } from '../../../../../server/http';
-import { deleteSection, updateSection } from '../../../../../server/page-sections';
+import { SectionUpdateSchema } from '~/lib/schemas/page';
+import { guardVenue } from '~/server/guard';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { deleteSection, updateSection } from '~/server/page-sections';
 
 /** Rename `{title}` and/or move `{move: "up" | "down"}` one section. */
 export const PATCH: APIRoute = ({ locals, params, request }) =>

@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { SectionCreateSchema } from '../../../../../lib/schemas/page';
-import { guardVenue } from '../../../../../server/guard';
-import { handle, json, parseWith, readJsonBody } from '../../../../../server/http';
-import { createSection, listSectionsWithCounts } from '../../../../../server/page-sections';
+import { SectionCreateSchema } from '~/lib/schemas/page';
+import { guardVenue } from '~/server/guard';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { createSection, listSectionsWithCounts } from '~/server/page-sections';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {

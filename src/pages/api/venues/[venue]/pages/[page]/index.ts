@@ -1,10 +1,10 @@
 import type { APIRoute } from 'astro';
-import { PageSaveSchema } from '../../../../../../lib/schemas/page';
-import { guardVenue } from '../../../../../../server/guard';
-import { handle, json, parseWith, readJsonBody } from '../../../../../../server/http';
-import { guardPage, loadPageWithCurrent, pageJson } from '../../../../../../server/pages';
-import { authorJson, revisionJson } from '../../../../../../server/revision-json';
-import { saveRevision } from '../../../../../../server/revisions';
+import { PageSaveSchema } from '~/lib/schemas/page';
+import { guardVenue } from '~/server/guard';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { guardPage, loadPageWithCurrent, pageJson } from '~/server/pages';
+import { authorJson, revisionJson } from '~/server/revision-json';
+import { saveRevision } from '~/server/revisions';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {

@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
-import { handle, json } from '../../../../../../../server/http';
-import { guardPage } from '../../../../../../../server/pages';
-import { listRevisions } from '../../../../../../../server/revisions';
+import { handle, json } from '~/server/http';
+import { guardPage } from '~/server/pages';
+import { listRevisions } from '~/server/revisions';
 
 /** The history of a page, newest first. */
 export const GET: APIRoute = ({ locals, params }) =>

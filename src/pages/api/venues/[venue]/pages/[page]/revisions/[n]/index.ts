@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
-import { handle, json } from '../../../../../../../../server/http';
-import { guardPage } from '../../../../../../../../server/pages';
-import { getRevision, revisionNumberParam } from '../../../../../../../../server/revisions';
+import { handle, json } from '~/server/http';
+import { guardPage } from '~/server/pages';
+import { getRevision, revisionNumberParam } from '~/server/revisions';
 
 /** One revision with its document and plain text. */
 export const GET: APIRoute = ({ locals, params }) =>

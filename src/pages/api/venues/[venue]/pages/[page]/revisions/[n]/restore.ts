@@ -1,8 +1,8 @@
 import type { APIRoute } from 'astro';
-import { RestoreSchema } from '../../../../../../../../lib/schemas/page';
-import { handle, json, parseWith, readJsonBody } from '../../../../../../../../server/http';
-import { guardPage } from '../../../../../../../../server/pages';
-import { restoreRevision, revisionNumberParam } from '../../../../../../../../server/revisions';
+import { RestoreSchema } from '~/lib/schemas/page';
+import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { guardPage } from '~/server/pages';
+import { restoreRevision, revisionNumberParam } from '~/server/revisions';
 
 /**
  * Makes a new revision equal to revision n. The body is optional: `{baseRevision}` turns the

@@ -1,13 +1,13 @@
 import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
-import type { PmNode } from '../lib/doc/types';
-import { getDb } from '../server/db';
-import { saveUpload } from '../server/files/save-upload';
-import { loadVenue } from '../server/guard';
-import { loadPageWithCurrent } from '../server/pages';
-import { PageSaveSchema } from '../lib/schemas/page';
-import { saveRevision } from '../server/revisions';
-import { users } from './schema';
+import type { PmNode } from '~/lib/doc/types';
+import { getDb } from '~/server/db';
+import { saveUpload } from '~/server/files/save-upload';
+import { loadVenue } from '~/server/guard';
+import { loadPageWithCurrent } from '~/server/pages';
+import { PageSaveSchema } from '~/lib/schemas/page';
+import { saveRevision } from '~/server/revisions';
+import { users } from '~/db/schema';
 
 /**
  * Two demo drawings (invented: a tail layout and a rack front), put into the demo venue exactly

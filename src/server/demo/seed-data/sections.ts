@@ -1,4 +1,4 @@
-import { DEFAULT_SECTIONS } from '../../lib/default-sections';
+import { DEFAULT_SECTIONS } from '~/lib/default-sections';
 import type { SeedSection } from './types';
 
 /** The demo venues use the sections every new venue starts with. */

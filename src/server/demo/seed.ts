@@ -1,9 +1,9 @@
 import { sql } from 'drizzle-orm';
-import type { Db } from './client';
-import { memberships, pages, revisions, sections, users, venues } from './schema';
+import type { Db } from '~/db/client';
+import { memberships, pages, revisions, sections, users, venues } from '~/db/schema';
 import { demoPeople, demoVenues } from './seed-data';
-import { docPlainText } from '../lib/doc/render-html';
-import { hashPassword } from '../server/auth/password';
+import { docPlainText } from '~/lib/doc/render-html';
+import { hashPassword } from '~/server/auth/password';
 
 export interface SeedResult {
   seeded: boolean;

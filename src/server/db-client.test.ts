@@ -3,10 +3,10 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { sql } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
-import { enqueueWrite } from '../server/write-queue';
-import { openDb } from './client';
-import { runMigrations } from './migrate';
-import { users, venues } from './schema';
+import { enqueueWrite } from './write-queue';
+import { openDb } from '~/db/client';
+import { runMigrations } from '~/db/migrate';
+import { users, venues } from '~/db/schema';
 
 async function freshDb() {
   const dir = mkdtempSync(join(tmpdir(), 'tl-db-'));
