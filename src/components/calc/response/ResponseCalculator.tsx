@@ -1,5 +1,6 @@
 import { useRef } from 'react';
 import { LIMITS, cascadeResponse, logFrequencyGrid, type CascadeResponse } from '~/lib/acoustics';
+import { F_MAX, F_MIN } from '~/lib/plot/frequency-axis';
 import Panel from '~/components/calc/Panel';
 import SelectField from '~/components/calc/SelectField';
 import { attempt, num } from '~/components/calc/attempt';
@@ -23,7 +24,7 @@ export default function ResponseCalculator({ search }: { search: string }) {
   const write = (next: FilterDraft[]) => set({ f: encodeFilters(next) });
   const outcome = attempt(() => {
     const rate = num(s.rate, 'the sample rate');
-    const grid = logFrequencyGrid(10, Math.min(24_000, rate / 2), POINTS);
+    const grid = logFrequencyGrid(F_MIN, Math.min(F_MAX, rate / 2), POINTS);
     return { rate, response: cascadeResponse(filters.map(toSpec), grid, rate) };
   });
   if (outcome.ok) lastGood.current = outcome.value.response;
