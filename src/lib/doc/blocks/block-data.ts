@@ -29,7 +29,7 @@ export const BLOCK_LIMITS = {
 /** Band types in the cookbook's words; "peaking" is the bell. */
 export type BandType = CookbookType;
 
-export interface EqBand {
+export type EqBand = {
   type: BandType;
   freq: number;
   /** dB; bells and shelves only. */
@@ -37,40 +37,40 @@ export interface EqBand {
   /** Q, or for shelves the cookbook slope S. */
   q: number;
   on: boolean;
-}
+};
 
-export interface EqBlockAttrs {
+export type EqBlockAttrs = {
   label: string;
   sampleRate: number;
   bands: EqBand[];
   outputGain: number;
   polarity: Polarity;
   note: string;
-}
+};
 
-export interface XoverEdge {
+export type XoverEdge = {
   family: CrossoverFamily;
   slope: number;
   freq: number;
-}
+};
 
-export interface XoverWay {
+export type XoverWay = {
   name: string;
   highPass: XoverEdge | null;
   lowPass: XoverEdge | null;
   gain: number;
   polarity: Polarity;
   delayMs: number;
-}
+};
 
-export interface CrossoverBlockAttrs {
+export type CrossoverBlockAttrs = {
   label: string;
   sampleRate: number;
   ways: XoverWay[];
   note: string;
-}
+};
 
-export interface DelayRow {
+export type DelayRow = {
   name: string;
   /** Distance to the alignment point, or a time typed directly. */
   mode: 'distance' | 'time';
@@ -81,16 +81,16 @@ export interface DelayRow {
   latencyMs: number;
   /** ms added so the reference arrives first (precedence). */
   offsetMs: number;
-}
+};
 
-export interface DelayBlockAttrs {
+export type DelayBlockAttrs = {
   label: string;
   sampleRate: number;
   temperature: number;
   tempUnit: 'C' | 'F';
   rows: DelayRow[];
   note: string;
-}
+};
 
 export const BAND_TYPE_LABELS: Record<BandType, string> = {
   peaking: 'Bell',

@@ -4,14 +4,14 @@ import { getDocSchema } from '../doc-schema';
 import { validateDoc } from '../validate-doc';
 import { renderDocHtml } from '../render-html';
 import type { PmNode } from '../types';
-import { newCrossoverBlock, newDelayBlock, newEqBlock, type EqBand, type EqBlockAttrs } from './block-data';
+import { newCrossoverBlock, newDelayBlock, newEqBlock } from './block-data';
 import { delayResult } from './block-curves';
 import { magnitudeY } from '~/lib/plot/response-svg';
 import { dbRange } from '~/lib/plot/frequency-axis';
 
 const doc = (...content: PmNode[]): PmNode => ({ type: 'doc', content });
-const eq = (attrs: Partial<EqBlockAttrs> & Record<string, unknown> = {}): PmNode => ({ type: 'eqBlock', attrs: { ...newEqBlock(), ...attrs } });
-const band = (b: Partial<EqBand> & Record<string, unknown>) => ({ type: 'peaking', freq: 1000, gain: 0, q: 1.41, on: true, ...b });
+const eq = (attrs: Record<string, unknown> = {}): PmNode => ({ type: 'eqBlock', attrs: { ...newEqBlock(), ...attrs } });
+const band = (b: Record<string, unknown>): Record<string, unknown> => ({ type: 'peaking', freq: 1000, gain: 0, q: 1.41, on: true, ...b });
 
 function refusal(input: PmNode): string {
   const r = validateDoc(input);
