@@ -75,7 +75,8 @@ describe('POST /api/calc/response with ways', () => {
   });
 
   it('leaves phase out where the magnitude is at its floor', async () => {
-    const r = (await (await send({ sampleRate: 48_000, filters: [{ type: 'notch', freq: 1000, q: 1 }], freqs: [1000, 2000] })).json()) as { phaseDeg: (number | null)[] };
+    // A cookbook low-pass has an exact zero at Nyquist (numerator 1 + 2z⁻¹ + z⁻² at z = −1).
+    const r = (await (await send({ sampleRate: 48_000, filters: [{ type: 'lowpass', freq: 1000, q: 0.7 }], freqs: [24_000, 100] })).json()) as { phaseDeg: (number | null)[] };
     expect(r.phaseDeg[0]).toBeNull();
     expect(typeof r.phaseDeg[1]).toBe('number');
   });

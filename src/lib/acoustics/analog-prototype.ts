@@ -4,9 +4,10 @@
  * towards Nyquist, so a band high up is narrower in the processor than its Q says.
  */
 import { LIMITS } from './limits';
-import { formatNumber, requireInRange, requireOneOf } from './guards';
+import { formatNumber, requireArray, requireInRange, requireOneOf } from './guards';
 import { COOKBOOK_TYPES, designBiquad, requireBelowNyquist, requireSampleRate, type CookbookType } from './biquad';
-import { biquadResponse, type Complex } from './biquad-response';
+import { sectionComplexResponse, type Complex } from './biquad-response';
+import type { BiquadCoefficients } from './biquad';
 import { logFrequencyGrid } from './frequency-grid';
 
 export interface CookbookBand {
@@ -34,10 +35,15 @@ const quad = (a: number, b: number, c: number, w: number): Complex => ({ re: c -
  * highShelf A·(A·s²+(√A/Q)s+1)/(s²+(√A/Q)s+A); shelves take 1/Q = √((A+1/A)(1/S−1)+2) when given S.
  */
 export function analogPrototypeResponse(band: CookbookBand, frequencyHz: number): Complex {
+  const at = analogPrototype(band);
+  return at(requireInRange(frequencyHz, LIMITS.frequencyHz, 'The response frequency', 'Hz'));
+}
+
+/** The band checked once, as a function of frequency (Hz) for curves and searches; sources as above. */
+function analogPrototype(band: CookbookBand): (frequencyHz: number) => Complex {
   if (typeof band !== 'object' || band === null) throw new RangeError('Describe the band with a type and a freq (Hz).');
   const type = requireOneOf(band.type, COOKBOOK_TYPES, 'The filter type');
   const f0 = requireInRange(band.freq, LIMITS.frequencyHz, 'The band frequency', 'Hz');
-  const f = requireInRange(frequencyHz, LIMITS.frequencyHz, 'The response frequency', 'Hz');
   const isShelf = type === 'lowshelf' || type === 'highshelf';
   const gain = type === 'peaking' || isShelf ? requireInRange(band.gain ?? 0, LIMITS.gainDb, 'The gain', 'dB') : 0;
   const A = 10 ** (gain / 40);
@@ -48,33 +54,47 @@ export function analogPrototypeResponse(band: CookbookBand, frequencyHz: number)
   } else {
     q = requireInRange(band.q ?? Math.SQRT1_2, LIMITS.q, 'Q', '');
   }
-  const w = f / f0;
-  const den = quad(1, 1 / q, 1, w);
-  switch (type) {
-    case 'lowpass':
-      return divide({ re: 1, im: 0 }, den);
-    case 'highpass':
-      return divide(quad(1, 0, 0, w), den);
-    case 'bandpass':
-      return divide(quad(0, 1 / q, 0, w), den);
-    case 'notch':
-      return divide(quad(1, 0, 1, w), den);
-    case 'allpass':
-      return divide(quad(1, -1 / q, 1, w), den);
-    case 'peaking':
-      return divide(quad(1, A / q, 1, w), quad(1, 1 / (A * q), 1, w));
-    case 'lowshelf': {
-      const r = divide(quad(1, Math.sqrt(A) / q, A, w), quad(A, Math.sqrt(A) / q, 1, w));
-      return { re: A * r.re, im: A * r.im };
+  return (f) => {
+    const w = f / f0;
+    const den = quad(1, 1 / q, 1, w);
+    switch (type) {
+      case 'lowpass':
+        return divide({ re: 1, im: 0 }, den);
+      case 'highpass':
+        return divide(quad(1, 0, 0, w), den);
+      case 'bandpass':
+        return divide(quad(0, 1 / q, 0, w), den);
+      case 'notch':
+        return divide(quad(1, 0, 1, w), den);
+      case 'allpass':
+        return divide(quad(1, -1 / q, 1, w), den);
+      case 'peaking':
+        return divide(quad(1, A / q, 1, w), quad(1, 1 / (A * q), 1, w));
+      case 'lowshelf': {
+        const r = divide(quad(1, Math.sqrt(A) / q, A, w), quad(A, Math.sqrt(A) / q, 1, w));
+        return { re: A * r.re, im: A * r.im };
+      }
+      case 'highshelf': {
+        const r = divide(quad(A, Math.sqrt(A) / q, 1, w), quad(1, Math.sqrt(A) / q, A, w));
+        return { re: A * r.re, im: A * r.im };
+      }
     }
-    case 'highshelf': {
-      const r = divide(quad(A, Math.sqrt(A) / q, 1, w), quad(1, Math.sqrt(A) / q, A, w));
-      return { re: A * r.re, im: A * r.im };
-    }
-  }
+  };
+}
+
+/** |H| in dB of the analog prototype at each of `freqsHz` (checked once), floored at −300 dB like the digital responses. */
+export function analogPrototypeDb(band: CookbookBand, freqsHz: readonly number[]): number[] {
+  const at = analogPrototype(band);
+  return (requireArray(freqsHz, 'The list of frequencies', 1, LIMITS.maxResponsePoints) as number[]).map((f, i) => {
+    const hz = requireInRange(f, LIMITS.frequencyHz, `Response frequency ${i + 1}`, 'Hz');
+    return Math.max(db(at(hz)), -300);
+  });
 }
 
 const db = (h: Complex) => 20 * Math.log10(Math.hypot(h.re, h.im));
+
+/** |H| in dB of a checked section at f; unchecked on purpose, since the searches below call it hundreds of times. */
+const sectionDb = (c: BiquadCoefficients, f: number, fs: number) => db(sectionComplexResponse(c, (2 * Math.PI * f) / fs));
 
 /** Bisection on a log axis for the frequency between lo and hi where `level(f)` crosses `target`. */
 function crossing(level: (f: number) => number, target: number, lo: number, hi: number): number {
@@ -119,7 +139,7 @@ export function digitalHalfGainWidth(band: CookbookBand, sampleRateHz: number): 
   const fs = requireSampleRate(sampleRateHz);
   const f0 = requireBelowNyquist(band.freq, fs, 'The band frequency');
   const coefficients = designBiquad({ type: 'peaking', frequencyHz: f0, sampleRateHz: fs, gainDb: gain, q: band.q });
-  return widthOf((f) => biquadResponse(coefficients, f, fs).magnitudeDb, gain, f0, fs / 2);
+  return widthOf((f) => sectionDb(coefficients, f, fs), gain, f0, fs / 2);
 }
 
 /**
@@ -142,10 +162,11 @@ export function prototypeDepartureDb(band: CookbookBand, sampleRateHz: number): 
   const fs = requireSampleRate(sampleRateHz);
   const f0 = requireBelowNyquist(band?.freq, fs, 'The band frequency');
   const coefficients = designBiquad({ type: band.type, frequencyHz: f0, sampleRateHz: fs, gainDb: band.gain, q: band.q, shelfSlope: band.shelfSlope });
+  const at = analogPrototype(band);
   let worst = 0;
   for (const f of logFrequencyGrid(20, Math.min(20_000, fs / 2), 200)) {
-    const digital = biquadResponse(coefficients, f, fs).magnitudeDb;
-    const analog = Math.max(db(analogPrototypeResponse(band, f)), -300);
+    const digital = Math.max(sectionDb(coefficients, f, fs), -300);
+    const analog = Math.max(db(at(f)), -300);
     // Deep stop bands and notch centres differ by huge amounts that nobody hears; look at the audible part.
     if (digital < -60 && analog < -60) continue;
     worst = Math.max(worst, Math.abs(digital - analog));

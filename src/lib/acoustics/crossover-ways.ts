@@ -2,7 +2,7 @@
 import { LIMITS } from './limits';
 import { formatNumber, requireArray, requireInRange, requireOneOf } from './guards';
 import { requireBelowNyquist, requireSampleRate, type BiquadCoefficients } from './biquad';
-import { cascadeComplexResponse, toDbAndDegrees, type Complex } from './biquad-response';
+import { sectionComplexResponse, toDbAndDegrees, type Complex } from './biquad-response';
 import { crossoverSections, type CrossoverFamily } from './crossover';
 
 export const POLARITIES = ['normal', 'inverted'] as const;
@@ -65,7 +65,12 @@ function checkWay(way: CrossoverWay, fs: number, index: number): CheckedWay {
 }
 
 function response(way: CheckedWay, f: number, fs: number): Complex {
-  const h = cascadeComplexResponse(way.sections, f, fs);
+  // Sections and frequency were checked once up front; this runs per way per point.
+  const omega = (2 * Math.PI * f) / fs;
+  const h = way.sections.reduce<Complex>((acc, c) => {
+    const x = sectionComplexResponse(c, omega);
+    return { re: acc.re * x.re - acc.im * x.im, im: acc.re * x.im + acc.im * x.re };
+  }, { re: 1, im: 0 });
   // A pure delay τ is e^{−j2πfτ}: exact for whole samples, the ideal fractional delay otherwise.
   const angle = -2 * Math.PI * f * way.delaySeconds;
   const c = Math.cos(angle) * way.scale;

@@ -91,6 +91,7 @@ const CALLS: Call[] = [
   ['waysResponse', fc.tuple(fc.array(hostileObject, { maxLength: 3 }), hostileArray, hostileValue)],
   ['phaseAboveFloor', n(2)],
   ['analogPrototypeResponse', fc.tuple(hostileObject, hostileValue)],
+  ['analogPrototypeDb', fc.tuple(hostileObject, hostileArray)],
   ['digitalHalfGainWidth', fc.tuple(hostileObject, hostileValue)],
   ['analogHalfGainWidth', fc.tuple(hostileObject)],
   ['prototypeDepartureDb', fc.tuple(hostileObject, hostileValue)],

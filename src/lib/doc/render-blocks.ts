@@ -17,7 +17,7 @@ import {
   type DelayBlockAttrs,
   type EqBlockAttrs,
 } from './blocks/block-data';
-import { bandWidths, crossoverCurves, delayResult, eqCurves } from './blocks/block-curves';
+import { bandWidths, crossoverCurves, delayResult, eqCurves, type EqCurves } from './blocks/block-curves';
 import { bandSummary, familyLabel, fixed, hz, num, rateLabel, signedDb } from './blocks/block-format';
 
 const e = (text: string) => escapeHtml(text);
@@ -36,8 +36,8 @@ function figure(svg: string, caption: string): string {
   return `<figure>${svg}<figcaption>${e(caption)}</figcaption></figure>`;
 }
 
-export function eqPlotSvg(block: EqBlockAttrs, idPrefix: string, compare?: EqBlockAttrs): string {
-  const curves = eqCurves(block);
+export function eqPlotSvg(block: EqBlockAttrs, idPrefix: string, compare?: EqBlockAttrs, computed?: EqCurves): string {
+  const curves = computed ?? eqCurves(block);
   const magnitude: PlotCurve[] = [];
   if (compare) {
     const before = eqCurves(compare);
@@ -76,7 +76,7 @@ function renderEq(block: EqBlockAttrs, id: string): string {
   return [
     `<section class="tl-block tl-eq" aria-labelledby="${id}-h" data-block="${EQ_BLOCK}">`,
     `<div id="${id}-h">${title('EQ', block.label)}</div>`,
-    figure(eqPlotSvg(block, id), `${Q_CONVENTION}${prototypeNote}`),
+    figure(eqPlotSvg(block, id, undefined, curves), `${Q_CONVENTION}${prototypeNote}`),
     `<div class="tl-values"><table><caption>Bands at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">#</th><th scope="col">Type</th><th scope="col" class="num">Freq (Hz)</th><th scope="col" class="num">Gain (dB)</th><th scope="col" class="num">Q / S</th><th scope="col" class="num">Width (oct)</th><th scope="col" class="num">Half-gain width at ${rateLabel(block.sampleRate)} (oct)</th><th scope="col">On</th></tr></thead><tbody>${rows || '<tr><td colspan="8">No bands.</td></tr>'}</tbody></table></div>`,
     `<p>Output gain ${signedDb(block.outputGain)}, polarity ${block.polarity}, sample rate ${rateLabel(block.sampleRate)}.</p>`,
     note(block.note),

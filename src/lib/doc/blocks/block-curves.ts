@@ -11,7 +11,7 @@ import {
   octavesFromQ,
   phaseAboveFloor,
   prototypeDepartureDb,
-  analogPrototypeResponse,
+  analogPrototypeDb,
   cascadeResponse,
   waysResponse,
   type FilterSpec,
@@ -58,10 +58,7 @@ export function eqCurves(block: EqBlockAttrs): EqCurves {
     .filter(({ b }) => prototypeDepartureDb(cookbookBand(b), block.sampleRate) > PROTOTYPE_DEPARTURE_DB)
     .map(({ b, index }) => ({
       index,
-      values: freqs.map((f) => {
-        const h = analogPrototypeResponse(cookbookBand(b), f);
-        return Math.max(20 * Math.log10(Math.hypot(h.re, h.im)), -300);
-      }),
+      values: analogPrototypeDb(cookbookBand(b), freqs),
     }));
   return { freqs, total, phase, parts, prototypes };
 }
