@@ -96,14 +96,15 @@ describe('an EQ block on a phone', () => {
     await changes.waitFor();
     await expect(changes.innerText()).resolves.toContain('Band 3: −4.5 → −6.0 dB');
     const overlay = page.getByTestId('diff-curves');
-    await expect(overlay.locator('.tl-curve-before').count()).resolves.toBe(1);
-    await expect(overlay.locator('.tl-curve-after').count()).resolves.toBe(1);
+    // The curves carry their label; the legend's sample strokes do not.
+    await expect(overlay.locator('.tl-curve-before[data-label="Before"]').count()).resolves.toBe(1);
+    await expect(overlay.locator('.tl-curve-after[data-label="After"]').count()).resolves.toBe(1);
   });
 
   it('a viewer reads the block but gets no way to edit', async () => {
     const v = await openAs(viewer, DEMO.viewer);
     await v.goto(`${server.url}/venues/${venue}/${slug}`);
-    await v.locator('section[data-block="eqBlock"] svg').waitFor();
+    await v.locator('section[data-block="eqBlock"] svg.tl-plot').waitFor();
     await expect(v.getByTestId('edit-page').count()).resolves.toBe(0);
     expect(pageErrors).toEqual([]);
   });

@@ -7,7 +7,7 @@ import { z } from 'zod';
 import { FILTER_TYPES, LIMITS, type FilterSpec } from '~/lib/acoustics';
 import { formatNumber } from '~/lib/acoustics/guards';
 import { outOfRange, shown } from './calc-params';
-import { XoverWaySchema, describePath } from './processor-blocks';
+import { XoverWaySchema } from './processor-blocks';
 import { BLOCK_LIMITS } from '~/lib/doc/blocks/block-data';
 
 const FAMILIES = ['butterworth', 'linkwitz-riley'] as const;
@@ -16,7 +16,7 @@ const EXAMPLE_FILTER = '{"type":"peaking","freq":1000,"gain":-3,"q":1.4}';
 const EXAMPLE_WAY = '[{"lowPass":{"family":"linkwitz-riley","slope":24,"freq":90},"highPass":null,"gain":0,"polarity":"normal","delayMs":4.1}]';
 
 /** A crossover way as a page's crossover block stores it; the name is optional here. */
-const CalcWaySchema = XoverWaySchema.extend({ name: XoverWaySchema.shape.name.optional() }).superRefine(() => undefined);
+const CalcWaySchema = XoverWaySchema.extend({ name: XoverWaySchema.shape.name.optional() });
 
 /** "Filter 2: " for a path inside filters[1], nothing at the top level. */
 function where(path: readonly PropertyKey[] | undefined): string {
