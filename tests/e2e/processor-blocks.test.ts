@@ -101,11 +101,42 @@ describe('an EQ block on a phone', () => {
     await expect(overlay.locator('.tl-curve-after[data-label="After"]').count()).resolves.toBe(1);
   });
 
+  it('save into a page from the delay calculator lands as a delay block in a new revision', async () => {
+    await page.goto(`${server.url}/calc/delay`);
+    await page.getByTestId('travel-distance').waitFor();
+    await page.getByTestId('travel-save').click();
+    await page.getByTestId('travel-save-page').waitFor();
+    await page.getByTestId('travel-save-page').selectOption(slug);
+    await page.getByTestId('travel-save-save').click();
+    await expect(page.getByTestId('travel-save-done').innerText()).resolves.toMatch(/^Saved as revision \d+ of /);
+    await page.goto(`${server.url}/venues/${venue}/${slug}`);
+    await expect(page.locator('section[data-block="delayBlock"]').count()).resolves.toBe(1);
+  });
+
+  it('the demo processing page (four blocks) ships no script for its blocks; how much script it ships is measured', async () => {
+    let bytes = 0;
+    const bodies: string[] = [];
+    page.on('response', async (res) => {
+      if (res.request().resourceType() !== 'script') return;
+      const body = await res.text().catch(() => '');
+      bytes += body.length;
+      bodies.push(body);
+    });
+    await page.goto(`${server.url}/venues/${venue}/system-processing`, { waitUntil: 'networkidle' });
+    await expect(page.locator('svg.tl-plot').count()).resolves.toBeGreaterThanOrEqual(3);
+    expect(bodies.some((b) => b.includes('tl-curve'))).toBe(false);
+    console.log(`read page with processor blocks: ${bodies.length} scripts, ${bytes} bytes of JavaScript (uncompressed)`);
+  });
+
   it('a viewer reads the block but gets no way to edit', async () => {
     const v = await openAs(viewer, DEMO.viewer);
     await v.goto(`${server.url}/venues/${venue}/${slug}`);
     await v.locator('section[data-block="eqBlock"] svg.tl-plot').waitFor();
     await expect(v.getByTestId('edit-page').count()).resolves.toBe(0);
+    // Nor from a calculator: no venue where a viewer edits is offered.
+    await v.goto(`${server.url}/calc/delay`);
+    await v.getByTestId('travel-save').click();
+    await expect(v.getByTestId('travel-save-error').innerText()).resolves.toMatch(/no venue where you may edit/);
     expect(pageErrors).toEqual([]);
   });
 });
