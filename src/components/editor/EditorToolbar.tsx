@@ -74,10 +74,10 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
           • List
         </ToolButton>
         <ToolButton label="Numbered list" active={s.ordered} onClick={() => run().toggleOrderedList().run()}>
-          1. List
+          <span aria-hidden="true">1.</span>&nbsp;Numbered
         </ToolButton>
         <ToolButton label="Checklist" active={s.tasks} onClick={() => run().toggleTaskList().run()}>
-          ☐ Checks
+          <span aria-hidden="true">☐</span>&nbsp;Checklist
         </ToolButton>
         {divider}
         {s.inTable ? (
