@@ -98,3 +98,35 @@ describe.each(THEMES)('axe-core, WCAG 2.2 AA, %s theme', (theme) => {
     expect(findings, JSON.stringify(findings, null, 1)).toEqual([]);
   }, 600_000);
 });
+
+describe('touch targets on a 390 × 844 phone', () => {
+  it('header items, breadcrumb links and every control in the main area are at least 44 px tall', async () => {
+    const small: string[] = [];
+    const out = await openAs('light', 'phone');
+    const admin = await openAs('light', 'phone', DEMO.admin);
+    const screens: [Page, string][] = [
+      [out, '/calc'],
+      [out, '/calc/bandwidth'],
+      [out, '/signin'],
+      ...signedInScreens().map(([path]) => [admin, path] as [Page, string]),
+    ];
+    for (const [page, path] of screens) {
+      await visit(page, path);
+      const found = await page.evaluate(() => {
+        const selector = [
+          'header a', 'header button', 'header summary', 'header input',
+          'nav[aria-label="Breadcrumb"] a',
+          'main button', 'main select', 'main summary',
+          'main input:not([type=hidden]):not([type=checkbox]):not([type=radio])',
+        ].join(',');
+        return [...document.querySelectorAll<HTMLElement>(selector)]
+          // Visually hidden inputs (a file picker behind its label) are reached through the label.
+          .filter((el) => el.offsetParent !== null && !el.closest('.ProseMirror, .prose-book') && !el.classList.contains('sr-only'))
+          .map((el) => ({ h: el.getBoundingClientRect().height, what: `${el.tagName.toLowerCase()} "${(el.getAttribute('aria-label') ?? el.textContent ?? '').trim().slice(0, 40)}"` }))
+          .filter((x) => x.h > 0 && x.h < 44);
+      });
+      small.push(...found.map((f) => `${path}: ${f.what} is ${f.h.toFixed(0)} px`));
+    }
+    expect(small).toEqual([]);
+  }, 300_000);
+});

@@ -43,7 +43,7 @@ export function DiffView({ base, older, newer }: Props) {
       <div className="mt-2 max-h-[70vh] overflow-auto whitespace-pre-wrap rounded-lg border border-line bg-surface p-3 leading-relaxed" tabIndex={0} role="region" aria-label="Changes between the two revisions" data-testid="diff">
         {shown.map((p, i) =>
           p.kind === 'fold' ? (
-            <button key={i} type="button" onClick={() => setWhole(true)} className="my-1 block w-full rounded-md bg-sunken px-2 py-2 text-left text-sm text-muted hover:text-fg">
+            <button key={i} type="button" onClick={() => setWhole(true)} className="my-1 block min-h-11 w-full rounded-md bg-sunken px-2 py-2 text-left text-sm text-muted hover:text-fg">
               ⋯ {p.lines} unchanged line{p.lines === 1 ? '' : 's'} (show)
             </button>
           ) : p.kind === 'added' ? (
