@@ -33,6 +33,8 @@ export class TraceParseError extends Error {
   constructor(
     message: string,
     readonly line?: number,
+    /** True when not one line of the file reads as numbers: it is not a trace at all. */
+    readonly noData = false,
   ) {
     super(line === undefined ? message : `Line ${line}: ${message}`);
     this.name = 'TraceParseError';
@@ -172,7 +174,7 @@ export function parseTrace(text: string): Trace {
     }
   }
   if (freqHz.length < 2) {
-    throw new TraceParseError('The file holds fewer than two lines of numbers; a trace needs at least two points (frequency and magnitude on each line).');
+    throw new TraceParseError('The file holds fewer than two lines of numbers; a trace needs at least two points (frequency and magnitude on each line).', undefined, freqHz.length === 0);
   }
   return {
     freqHz,
