@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView, PageRef } from '~/lib/schemas/file';
-import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
+import { UPLOAD_ACCEPT_WITH_TRACES } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
 import { uploadFile, UploadError } from './upload-file';
 
@@ -88,7 +88,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
           ref={inputRef}
           id={inputId}
           type="file"
-          accept={UPLOAD_ACCEPT}
+          accept={UPLOAD_ACCEPT_WITH_TRACES}
           multiple={!single}
           className="peer sr-only"
           onChange={(e) => add(e.currentTarget.files)}

@@ -18,7 +18,7 @@ const IMAGE_TYPES: Record<string, ImageFormat> = {
 };
 
 export const NOT_ACCEPTED =
-  'Throwline takes photos (JPEG, PNG, WebP, or HEIC from a phone), PDFs and measurement traces (plain-text columns). This file is not one of them';
+  'Throwline takes photos (JPEG, PNG or WebP; an iPhone\'s HEIC photos shared as JPEG), PDFs and measurement traces (plain-text columns). This file is not one of them';
 
 /**
  * Decides the type from the bytes alone: the name and the declared Content-Type are ignored.
