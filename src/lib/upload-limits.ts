@@ -9,6 +9,9 @@ export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;
 /** What the file picker offers; on a phone `image/*` opens the camera roll and the camera. */
 export const UPLOAD_ACCEPT = 'image/*,application/pdf';
 
+/** The files screen also takes measurement traces exported as text. */
+export const UPLOAD_ACCEPT_WITH_TRACES = `${UPLOAD_ACCEPT},text/plain,text/csv,.txt,.csv,.tsv`;
+
 export const MAX_CAPTION_CHARS = 500;
 
 const ACCEPTED_TYPES = /^(image\/(jpeg|png|webp|heic|heif)|application\/pdf|text\/(plain|csv|tab-separated-values))$/i;

@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView, PageRef } from '~/lib/schemas/file';
-import { UPLOAD_ACCEPT, uploadPrecheck } from '~/lib/upload-limits';
+import { UPLOAD_ACCEPT_WITH_TRACES, uploadPrecheck } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
 import { uploadFile, UploadError } from './upload-file';
 
@@ -93,7 +93,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
           ref={inputRef}
           id={inputId}
           type="file"
-          accept={UPLOAD_ACCEPT}
+          accept={UPLOAD_ACCEPT_WITH_TRACES}
           multiple={!single}
           className="peer sr-only"
           onChange={(e) => add(e.currentTarget.files)}
@@ -105,7 +105,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
         >
           {pickLabel ?? (single ? 'Choose a photo or PDF' : 'Choose photos or PDFs')}
         </label>
-        <span className="text-sm text-muted">JPEG, PNG, WebP or PDF, up to 25 MiB each (an iPhone's HEIC photos: share them as JPEG). Location data is removed from photos.</span>
+        <span className="text-sm text-muted">JPEG, PNG, WebP, PDF, or a measurement trace as text columns; up to 25 MiB each (an iPhone's HEIC photos: share them as JPEG). Location data is removed from photos.</span>
       </div>
 
       {queue.length > 0 && (
