@@ -1,4 +1,5 @@
 import Choice from '~/components/calc/Choice';
+import { lengthFromMeters } from '~/lib/acoustics';
 import NumberField from '~/components/calc/NumberField';
 import Panel from '~/components/calc/Panel';
 import Result, { Figure } from '~/components/calc/Result';
@@ -36,7 +37,7 @@ export default function AirPanel({ s, set, air }: DelayPanelProps) {
         {({ speed }) => (
           <div className="flex gap-6">
             <Figure label="Speed of sound" value={fixed(speed, 1)} unit="m/s" />
-            <Figure label="" value={fixed(speed / 0.3048, 0)} unit="ft/s" />
+            <Figure label="" value={fixed(lengthFromMeters(speed, 'ft'), 0)} unit="ft/s" />
           </div>
         )}
       </Result>
