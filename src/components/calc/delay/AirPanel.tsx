@@ -32,6 +32,7 @@ export default function AirPanel({ s, set, air }: DelayPanelProps) {
         <Choice label="Distances in" value={s.unit} onChange={switchLength} options={[{ value: 'm', label: 'm' }, { value: 'ft', label: 'ft' }]} testId="length-unit" />
         <Choice label="Times in" value={s.timeUnit} onChange={switchTime} options={[{ value: 'ms', label: 'ms' }, { value: 'samples', label: 'samples' }]} testId="time-unit" />
       </div>
+      <NumberField label="Relative humidity (optional)" value={s.rh ?? ''} onChange={(rh) => set({ rh })} unit="%" hint="Leave empty for dry air; humid air is faster (Cramer 1993)." testId="rh" />
       <SelectField label="Sample rate" value={s.rate} options={SAMPLE_RATES} onChange={(rate) => set({ rate })} testId="rate" />
       <Result outcome={air} testId="speed-result">
         {({ speed }) => (
