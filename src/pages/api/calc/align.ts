@@ -5,7 +5,7 @@ import { calcGet } from './_calc-route';
 const NOTES = {
   fill: undefined,
   none: 'No delay needed: the fill already arrives after the main by at least the offset, inside the precedence window.',
-  main: 'The fill arrives too late for the offset, so only delaying the main lines them up; delaying a main moves everything it covers.',
+  main: 'The fill is farther from the listener than the offset allows (or its feed is later), so only delaying the main lines them up; delaying a main moves everything it covers.',
 } as const;
 
 /** Which box waits, and how long, so the fill lands `offset` ms after the main at the listener. */
