@@ -63,7 +63,7 @@ describe('fillDelayMs ((main − fill)/c·1000 + offset)', () => {
           if (r.delayOn === 'none') {
             // No delay: the fill already lands between the offset and the precedence window after the main.
             expect(fillArrival - mainArrival).toBeGreaterThanOrEqual(offset - 1e-6);
-            expect(fillArrival - mainArrival).toBeLessThanOrEqual(Math.max(offset, 30) + 1e-6);
+            expect(fillArrival - mainArrival).toBeLessThanOrEqual(Math.max(offset, 20) + 1e-6);
           } else {
             expect(fillArrival - mainArrival).toBeCloseTo(offset, 5);
           }

@@ -19,10 +19,11 @@ export interface FillDelayInput {
 }
 
 /**
- * Longest lag of a fill behind the main that still fuses with it and leaves the image on the main
- * (precedence effect: about 30 ms for speech, Haas 1972; figure from memory, common practice).
+ * Longest lag of a fill behind the main that is left alone: it still fuses with the main and leaves
+ * the image there. Haas (1972) found fusion up to about 30 ms for speech (figure from memory); 20 ms
+ * keeps music clear of the echo threshold — common practice.
  */
-export const PRECEDENCE_WINDOW_MS = 30;
+export const PRECEDENCE_WINDOW_MS = 20;
 
 /** Below this a delay is "none": no processor sets a thousandth of a microsecond. */
 const NO_DELAY_MS = 1e-6;

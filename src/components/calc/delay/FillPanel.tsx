@@ -50,7 +50,7 @@ export default function FillPanel({ s, set, air }: DelayPanelProps) {
             )}
             {delayOn === 'main' && (
               <p className="text-sm text-warn">
-                The fill arrives too late for this offset, so no fill delay can line them up. Delaying the main instead moves everything it covers; check the
+                The fill is farther from this listener than the offset allows, so no fill delay can line them up. Delaying the main instead moves everything it covers; check the
                 positions first.
               </p>
             )}

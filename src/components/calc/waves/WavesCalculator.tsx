@@ -13,12 +13,16 @@ import SubArrayPanel from './SubArrayPanel';
 import WavelengthPanel from './WavelengthPanel';
 import { GUIDE, WAVES_DEFAULTS, WAVES_REMEMBERED } from './waves-state';
 
+/** ISO 9613-1's own example conditions use 50 %; a typical indoor figure too. */
+const DEFAULT_RH = 50;
+
 /** Wavelength, comb filtering, air absorption and sub arrays: one air and one set of units feed them all. */
 export default function WavesCalculator({ search }: { search: string }) {
   const [s, set] = useQueryState(WAVES_DEFAULTS, search, WAVES_REMEMBERED);
   const air = attempt(() => {
     const celsius = celsiusFromTyped(num(s.temp, 'the air temperature'), s.tempUnit);
-    const rh = requireHumidity(num(s.rh, 'the relative humidity'));
+    // The delay screen shares this key and leaves it empty for dry air; absorption needs a figure, so empty reads as 50 %.
+    const rh = requireHumidity((s.rh ?? '').trim() === '' ? DEFAULT_RH : num(s.rh, 'the relative humidity'));
     return { celsius, rh, speed: speedOfSound(celsius, rh) };
   });
   const switchLength = (unit: string) => unit !== s.unit && set({ unit, cdist: convertText(s.cdist, lengthTo(unit)), adist: convertText(s.adist, lengthTo(unit)) });
@@ -29,7 +33,7 @@ export default function WavesCalculator({ search }: { search: string }) {
       <Panel title="Air and units" guide={`${GUIDE}#air`} testId="waves-air-panel">
         <div className="grid grid-cols-2 gap-3">
           <NumberField label="Air temperature" value={s.temp} onChange={(temp) => set({ temp })} unit={`°${s.tempUnit}`} signed testId="waves-temp" />
-          <NumberField label="Relative humidity" value={s.rh} onChange={(rh) => set({ rh })} unit="%" testId="waves-rh" />
+          <NumberField label="Relative humidity" value={s.rh} onChange={(rh) => set({ rh })} unit="%" hint={(s.rh ?? '').trim() === '' ? `Empty: ${DEFAULT_RH} % assumed.` : undefined} testId="waves-rh" />
           <Choice label="Temperature in" value={s.tempUnit} onChange={switchTemperature} options={[{ value: 'C', label: '°C' }, { value: 'F', label: '°F' }]} testId="waves-temp-unit" />
           <Choice label="Distances in" value={s.unit} onChange={switchLength} options={[{ value: 'm', label: 'm' }, { value: 'ft', label: 'ft' }]} testId="waves-length-unit" />
         </div>
