@@ -21,12 +21,18 @@ const NO_VENUE_GUEST: ResolvedPass = { guestPassId: '', venueId: '', label: '', 
 
 const GUEST_PATH = /^\/advance\/([^/]+)(?:\/|$)/;
 
-/** The guest token of this request: in the /advance/<token> path, or `Authorization: Bearer` for the JSON route. */
-function guestTokenOf(request: Request, pathname: string): string | null {
+/** The only JSON routes a pass presented as `Authorization: Bearer` may open. */
+const GUEST_API = /^\/api\/venues\/[^/]+\/(advance|changes)$/;
+
+/**
+ * The guest token of this request: in the /advance/<token> path, or `Authorization: Bearer` for
+ * the JSON routes. `scoped` is false when a Bearer token is sent anywhere else.
+ */
+function guestTokenOf(request: Request, pathname: string): { token: string; scoped: boolean } | null {
   const inPath = GUEST_PATH.exec(pathname);
-  if (inPath) return decodeURIComponent(inPath[1]);
+  if (inPath) return { token: decodeURIComponent(inPath[1]), scoped: true };
   const auth = request.headers.get('authorization');
-  return auth?.startsWith('Bearer ') ? auth.slice(7).trim() : null;
+  return auth?.startsWith('Bearer ') ? { token: auth.slice(7).trim(), scoped: GUEST_API.test(pathname) } : null;
 }
 
 function tooManyGuesses(retryAfterMs: number): Response {
@@ -64,16 +70,16 @@ export const onRequest = defineMiddleware(async (context, next) => {
   if (dynamic) {
     context.locals.user = await readSessionUser(context.request);
     context.locals.principal = context.locals.user;
-    const token = guestTokenOf(context.request, pathname);
-    if (token !== null) {
-      const pass = await resolvePass(token);
+    const presented = guestTokenOf(context.request, pathname);
+    if (presented !== null) {
+      const pass = await resolvePass(presented.token);
       if (pass === null) {
         const address = context.clientAddress;
         const wait = await blockedFor(guestTokenMisses, address);
         if (wait > 0) return setHeaders(tooManyGuesses(wait), { 'referrer-policy': 'no-referrer' }, {});
         await countHit(guestTokenMisses, address);
       }
-      const live = pass !== null && pass !== 'dead' ? pass : null;
+      const live = pass !== null && pass !== 'dead' && presented.scoped ? pass : null;
       context.locals.guest = live;
       // A guest link speaks for itself, even in a browser that is also signed in. A link that
       // opens nothing is a guest of no venue: every guard then answers 404, never "sign in".
