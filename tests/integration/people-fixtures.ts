@@ -55,7 +55,8 @@ export async function outbox(server: TestServer): Promise<ReceivedMail[]> {
 /** Waits for a message to this address (mail is sent before the route answers, but be kind to slow disks). */
 export async function mailTo(server: TestServer, address: string, count = 1): Promise<ReceivedMail> {
   for (let i = 0; i < 50; i++) {
-    const mine = (await outbox(server)).filter((m) => m.to.includes(address));
+    // Exact address: "engineer@…" must not match "new.engineer@…".
+    const mine = (await outbox(server)).filter((m) => m.to.split(/[\s,<>]+/).includes(address));
     if (mine.length >= count) return mine[count - 1];
     await new Promise((r) => setTimeout(r, 100));
   }

@@ -101,6 +101,10 @@ describe('the last-manager rule', () => {
   });
 });
 
+// Every attempt runs a full scrypt verification (CPU-bound by design); on a loaded two-core
+// runner eleven of them can take longer than the default 60 s.
+const SLOW = 240_000;
+
 describe('sign-in limits that hold', () => {
   it('rotating X-Forwarded-For does not reset the count (no TRUST_PROXY set)', async () => {
     const statuses: number[] = [];
@@ -112,7 +116,7 @@ describe('sign-in limits that hold', () => {
     const right = await attemptSignIn(server.url, DEMO.admin, DEMO_PASSWORD, { 'x-forwarded-for': '203.0.113.77' });
     expect(right.status).toBe(429);
     expect(right.jar.header()).not.toContain('session-token');
-  });
+  }, SLOW);
 
   it('counts the e-mail Auth.js uses when the field is repeated', async () => {
     const target = DEMO.otherManager;
@@ -134,7 +138,7 @@ describe('sign-in limits that hold', () => {
     }
     expect(tries[10]).toBe(429);
     expect((await attemptSignIn(server.url, target, DEMO_PASSWORD)).status).toBe(429);
-  });
+  }, SLOW);
 
   it('keeps the counters in the database, where other server processes read them', async () => {
     const { rows } = await people.db.execute("select key, count from throttle_counters where key like 'signin-acct:%'");
@@ -158,5 +162,5 @@ describe('sign-in limits behind a named proxy', () => {
     // Another client behind the same proxy is not locked out by the first one's guesses.
     const other = await attemptSignIn(proxied.url, DEMO.viewer, DEMO_PASSWORD, { 'x-forwarded-for': '198.51.100.20' });
     expect(other.jar.header()).toContain('session-token');
-  });
+  }, SLOW);
 });
