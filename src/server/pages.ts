@@ -6,7 +6,7 @@ import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Tx } from './db';
 import type { Action } from '~/lib/permissions';
-import { loadVenue, requirePermission, requireUser } from './guard';
+import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
@@ -128,7 +128,7 @@ export async function createPage(venueId: string, input: PageCreate, actor: Sess
 }
 
 /** 401 → 404 (venue, then page) → 403 for routes about one page. */
-export async function guardPage(user: SessionUser | null | undefined, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
+export async function guardPage(user: RequestPrincipal, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
   const signedIn = requireUser(user);
   const ctx = await loadVenue(signedIn, venueSlug);
   const page = await findPage(ctx.venue.id, pageSlug);

@@ -21,6 +21,11 @@ export interface RenderOptions {
    * as a short note instead of a broken image.
    */
   isImageAvailable?: (src: string) => boolean;
+  /**
+   * Where the reader fetches an image of this instance from. A guest has no session, so the
+   * guest view points images at its own pass-scoped file route instead of /files/….
+   */
+  imageUrl?: (src: string) => string;
 }
 
 const SIMPLE_BLOCKS: Record<string, string> = {
@@ -142,7 +147,7 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
         return [`<span class="missing-photo" role="note">Photo removed${alt ? `: ${escapeHtml(alt)}` : ''}</span>`, ''];
       }
       const title = typeof node.attrs?.title === 'string' ? node.attrs.title : '';
-      return [`<img${attr('src', src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
+      return [`<img${attr('src', options.imageUrl ? options.imageUrl(src) : src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
     }
     default:
       // Unknown nodes keep their text but lose their markup.

@@ -8,7 +8,7 @@ import { saveRevision } from '~/server/revisions';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
-    const { venue } = await guardVenue(locals.user, params.venue, 'venue.read');
+    const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
     const { page, section, revision } = await loadPageWithCurrent(venue.id, params.page);
     return json({
       page: pageJson(page, section),
@@ -19,7 +19,7 @@ export const GET: APIRoute = ({ locals, params }) =>
 /** Saves on top of `baseRevision`; 409 with the current revision when someone saved first. */
 export const PUT: APIRoute = ({ locals, params, request }) =>
   handle(async () => {
-    const { venue, user } = await guardPage(locals.user, params.venue, params.page, 'page.edit');
+    const { venue, user } = await guardPage(locals.principal, params.venue, params.page, 'page.edit');
     const input = parseWith(PageSaveSchema, await readJsonBody(request));
     const saved = await saveRevision(venue.id, params.page, input, user);
     return json(saved);

@@ -6,7 +6,7 @@ import { listRevisions } from '~/server/revisions';
 /** The history of a page, newest first. */
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
-    const { page } = await guardPage(locals.user, params.venue, params.page, 'venue.read');
+    const { page } = await guardPage(locals.principal, params.venue, params.page, 'venue.read');
     const revisions = await listRevisions(page.id);
     return json({ page: { slug: page.slug, title: page.title, currentRevision: page.currentRevision }, revisions });
   });
