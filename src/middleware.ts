@@ -1,6 +1,7 @@
 import { defineMiddleware } from 'astro:middleware';
+import { foreignOriginRefusal } from './server/origin-check';
 import { readSessionUser } from './server/session';
-import { securityHeaders } from './server/security-headers';
+import { completePagePolicy, securityHeaders } from './server/security-headers';
 
 /** Paths that never depend on who is asking; reading the session there is wasted work. */
 function isAnonymousPath(pathname: string): boolean {
@@ -14,17 +15,10 @@ function isAnonymousPath(pathname: string): boolean {
   );
 }
 
-/**
- * Fills `locals.user` once per request and adds the security headers. It authorises nothing:
- * every page and route checks permissions itself, through src/server/guard.ts.
- */
-export const onRequest = defineMiddleware(async (context, next) => {
-  context.locals.user = null;
-  if (!isAnonymousPath(context.url.pathname) && !context.isPrerendered) {
-    context.locals.user = await readSessionUser(context.request);
-  }
-  const response = await next();
+function withSecurityHeaders(response: Response): Response {
   try {
+    const pagePolicy = response.headers.get('content-security-policy');
+    if (pagePolicy && pagePolicy.includes("'sha256-")) response.headers.set('content-security-policy', completePagePolicy(pagePolicy));
     for (const [name, value] of Object.entries(securityHeaders)) {
       if (!response.headers.has(name)) response.headers.set(name, value);
     }
@@ -35,4 +29,19 @@ export const onRequest = defineMiddleware(async (context, next) => {
     for (const [name, value] of Object.entries(securityHeaders)) if (!copy.headers.has(name)) copy.headers.set(name, value);
     return copy;
   }
+}
+
+/**
+ * Refuses a write sent from another site, fills `locals.user` once per request and adds the
+ * security headers. It authorises nothing: every page and route checks permissions itself,
+ * through src/server/guard.ts.
+ */
+export const onRequest = defineMiddleware(async (context, next) => {
+  context.locals.user = null;
+  const refused = foreignOriginRefusal(context.request, context.url);
+  if (refused) return withSecurityHeaders(refused);
+  if (!isAnonymousPath(context.url.pathname) && !context.isPrerendered) {
+    context.locals.user = await readSessionUser(context.request);
+  }
+  return withSecurityHeaders(await next());
 });
