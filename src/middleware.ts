@@ -18,7 +18,9 @@ function isAnonymousPath(pathname: string): boolean {
 function withSecurityHeaders(response: Response): Response {
   try {
     const pagePolicy = response.headers.get('content-security-policy');
-    if (pagePolicy && pagePolicy.includes("'sha256-")) response.headers.set('content-security-policy', completePagePolicy(pagePolicy));
+    // Astro's page policy (with the script hashes) lacks the inline-style lines; a file's own
+    // sandbox policy is left as the route wrote it.
+    if (pagePolicy && /^text\/html\b/i.test(response.headers.get('content-type') ?? '')) response.headers.set('content-security-policy', completePagePolicy(pagePolicy));
     for (const [name, value] of Object.entries(securityHeaders)) {
       if (!response.headers.has(name)) response.headers.set(name, value);
     }

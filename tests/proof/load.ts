@@ -18,12 +18,12 @@ export async function load(url: string, venue: string, seconds: number): Promise
   const writer = await signIn(url, DEMO.engineer);
   const { pages } = (await (await reader.fetch(`/api/venues/${venue}/pages`)).json()) as { pages: { slug: string }[] };
   const slugs = pages.map((p) => p.slug);
-  const reads = [
-    (i: number) => `/api/venues/${venue}/pages`,
+  const reads: ((i: number) => string)[] = [
+    () => `/api/venues/${venue}/pages`,
     (i: number) => `/api/venues/${venue}/pages/${slugs[i % slugs.length]}`,
     (i: number) => `/venues/${venue}/${slugs[i % slugs.length]}`,
     (i: number) => `/api/search?q=${['stage', 'amp', 'patch', 'power'][i % 4]}`,
-    (i: number) => `/api/venues/${venue}/files`,
+    () => `/api/venues/${venue}/files`,
     (i: number) => `/api/venues/${venue}/pages/${slugs[i % slugs.length]}/revisions`,
     () => `/calc/bandwidth`,
   ];
