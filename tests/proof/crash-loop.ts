@@ -2,6 +2,7 @@ import { createClient } from '@libsql/client';
 import { createHash, randomBytes } from 'node:crypto';
 import { existsSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { STORED_NAME as STORED } from '~/server/files/storage-paths';
 import { DEMO } from '../helpers/paths';
 import { signIn, type Client } from '../helpers/session';
 import { startOn } from './proof-server';
@@ -20,7 +21,6 @@ export interface CrashResult {
 }
 
 const docOf = (text: string) => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text }] }] });
-const STORED = /^[0-9a-f]{64}(\.(jpg|png|webp|pdf)|-display\.webp|-thumb\.webp)$/;
 
 function pdf(): Buffer {
   return Buffer.concat([Buffer.from('%PDF-1.4\n'), randomBytes(40_000 + Math.floor(Math.random() * 200_000))]);
