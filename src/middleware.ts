@@ -3,7 +3,8 @@ import { guestTokenMisses } from './server/auth/rate-limit';
 import { blockedFor, countHit } from './server/auth/throttle';
 import { resolvePass, type ResolvedPass } from './server/guest-passes';
 import { readSessionUser } from './server/session';
-import { securityHeaders } from './server/security-headers';
+import { completePagePolicy, securityHeaders } from './server/security-headers';
+import { foreignOriginRefusal } from './server/origin-check';
 
 /** Paths that never depend on who is asking; reading the session there is wasted work. */
 function isAnonymousPath(pathname: string): boolean {
@@ -44,6 +45,10 @@ function tooManyGuesses(retryAfterMs: number): Response {
 
 function setHeaders(response: Response, extra: Record<string, string>, force: Record<string, string>): Response {
   const apply = (r: Response) => {
+    const pagePolicy = r.headers.get('content-security-policy');
+    // Astro's page policy (with the script hashes) lacks the inline-style lines; a file's own
+    // sandbox policy is left as the route wrote it.
+    if (pagePolicy && /^text\/html\b/i.test(r.headers.get('content-type') ?? '')) r.headers.set('content-security-policy', completePagePolicy(pagePolicy));
     for (const [name, value] of Object.entries({ ...securityHeaders, ...extra })) if (!r.headers.has(name)) r.headers.set(name, value);
     for (const [name, value] of Object.entries(force)) r.headers.set(name, value);
     return r;
@@ -58,13 +63,16 @@ function setHeaders(response: Response, extra: Record<string, string>, force: Re
 
 /**
  * Fills `locals.user` (a member's session), `locals.guest` (a guest pass) and `locals.principal`
- * (whichever is asking) once per request, and adds the security headers. It authorises nothing:
+ * (whichever is asking) once per request, refuses a write sent from another site, and adds the
+ * security headers. It authorises nothing:
  * every page and route checks permissions itself, through src/server/guard.ts.
  */
 export const onRequest = defineMiddleware(async (context, next) => {
   context.locals.user = null;
   context.locals.guest = null;
   context.locals.principal = null;
+  const refused = foreignOriginRefusal(context.request, context.url);
+  if (refused) return setHeaders(refused, {}, {});
   const { pathname } = context.url;
   const dynamic = !isAnonymousPath(pathname) && !context.isPrerendered;
   if (dynamic) {

@@ -2,6 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { copyFileSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { SERVE_SCRIPT } from '~/cli/build-if-stale.mjs';
 import { ROOT, TEMPLATE_DB, TMP_ROOT } from './paths';
 
 export interface TestServer {
@@ -40,7 +41,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
   copyFileSync(TEMPLATE_DB, dbPath);
   const port = await freePort();
   let log = '';
-  const child: ChildProcess = spawn(process.execPath, ['src/cli/serve.mjs'], {
+  const child: ChildProcess = spawn(process.execPath, [SERVE_SCRIPT], {
     cwd: ROOT,
     env: {
       ...process.env,

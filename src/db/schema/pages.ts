@@ -48,7 +48,9 @@ export const revisions = sqliteTable(
     authorId: text('author_id').references(() => users.id, { onDelete: 'set null' }),
     /** Set when this revision was made by restoring an older one. */
     restoredFrom: integer('restored_from'),
+    /** The save's Idempotency-Key header, so a retry of a save that landed finds its revision. */
+    idempotencyKey: text('idempotency_key'),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('revisions_page_number_idx').on(t.pageId, t.number)],
+  (t) => [uniqueIndex('revisions_page_number_idx').on(t.pageId, t.number), uniqueIndex('revisions_page_idempotency_idx').on(t.pageId, t.idempotencyKey)],
 );

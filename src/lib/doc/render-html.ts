@@ -1,5 +1,5 @@
 import { escapeHtml } from './escape-html';
-import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
+import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
 import { blockPlainText, processorBlockRenderers } from './render-blocks';
 
@@ -66,9 +66,10 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
         break;
       case 'link': {
         const href = mark.attrs?.href;
-        if (isSafeLinkHref(href)) {
-          const external = /^https?:/i.test(href);
-          html = `<a${attr('href', href)}${external ? ' rel="noopener noreferrer nofollow" target="_blank"' : ''}>${html}</a>`;
+        const kind = linkKind(href);
+        if (kind) {
+          const external = kind === 'external';
+          html = `<a${attr('href', href as string)}${external ? ' rel="noopener noreferrer nofollow" target="_blank"' : ''}>${html}</a>`;
         }
         break;
       }

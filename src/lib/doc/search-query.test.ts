@@ -25,4 +25,13 @@ describe('toFtsQuery', () => {
   it('caps the number of terms', () => {
     expect(toFtsQuery(Array.from({ length: 40 }, (_, i) => `w${i}`).join(' '))!.split(' ').length).toBe(12);
   });
+
+  it.each([
+    ['a\u0000b', '"a" "b"*'],
+    ['\u0000', null],
+    ['stage\u0001box', '"stage" "box"*'],
+    ['x\u007F\u001By', '"x" "y"*'],
+  ])('control characters in %j count as spaces, so FTS5 never meets them', (input, expected) => {
+    expect(toFtsQuery(input)).toBe(expected);
+  });
 });
