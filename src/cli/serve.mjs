@@ -1,0 +1,133 @@
+// The one way the built app is served: `npm start` spawns this file, and so do the tests and the
+// benchmark (tests/helpers/server.ts), so what they measure is what a venue runs.
+//
+// The Astro node adapter is built in middleware mode and sits behind a small HTTP layer:
+//   sirv         the client build, with the brotli / gzip files written at build time
+//   compression  HTML and JSON rendered per request (photos, PDFs and fonts never: already packed)
+//   the adapter  everything else
+// With WEB_CONCURRENCY > 1 the primary forks that many worker processes over the same database
+// (node:cluster shares the listening socket).
+import { spawnSync } from 'node:child_process';
+import cluster from 'node:cluster';
+import { availableParallelism } from 'node:os';
+import { resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { BUILD_DIR, SERVER_ENTRY } from './build-if-stale.mjs';
+
+// The build is a production build; React, Astro and Vite pick their runtime from NODE_ENV when
+// first loaded, so anything else here would serve React's development SSR (several times slower).
+process.env.NODE_ENV = 'production';
+
+/** WEB_CONCURRENCY: a number of processes, or "auto" for one per CPU core. Default 1. */
+export function workerCount(value = process.env.WEB_CONCURRENCY) {
+  if (value === undefined || value === '') return 1;
+  if (value === 'auto') return availableParallelism();
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 1 || n > 64) {
+    console.error(`✗ WEB_CONCURRENCY must be a whole number from 1 to 64, or "auto" (got "${value}").`);
+    process.exit(1);
+  }
+  return n;
+}
+
+/** Only text is worth compressing per request; images, PDFs and fonts are packed already. */
+const TEXT_TYPE = /^(text\/|application\/(json|javascript|xml|manifest\+json|problem\+json)|image\/svg\+xml)/i;
+
+async function serveOneProcess() {
+  const [{ default: polka }, { default: sirv }, { default: compression }, { handler }] = await Promise.all([
+    import('polka'),
+    import('sirv'),
+    import('compression'),
+    import(pathToFileURL(resolve(SERVER_ENTRY)).href),
+  ]);
+  const assets = sirv(resolve(BUILD_DIR, 'client'), {
+    brotli: true,
+    gzip: true,
+    etag: true,
+    dotfiles: false,
+    // Hashed file names never change content; everything else in public/ is revalidated.
+    setHeaders(res, pathname) {
+      res.setHeader('Cache-Control', pathname.startsWith('/_astro/') ? 'public, max-age=31536000, immutable' : 'public, max-age=0, must-revalidate');
+    },
+  });
+  const compress = compression({
+    filter: (_req, res) => TEXT_TYPE.test(String(res.getHeader('Content-Type') ?? '')),
+    threshold: 1024,
+    // Quality 4 and level 6: most of the saving for a small part of the CPU of the maximum.
+    brotli: { params: { [(await import('node:zlib')).constants.BROTLI_PARAM_QUALITY]: 4 } },
+  });
+  const app = polka({
+    onError(err, _req, res) {
+      console.error(err);
+      if (!res.headersSent) res.writeHead(500);
+      res.end();
+    },
+  });
+  app.use((req, res, next) => {
+    // The adapter's own server answers a malformed URL with 400; keep that.
+    try {
+      decodeURI(req.url ?? '/');
+    } catch {
+      res.writeHead(400);
+      res.end('Bad request.');
+      return;
+    }
+    next();
+  });
+  app.use(assets, compress, (req, res, next) => handler(req, res, next));
+  app.use((_req, res) => {
+    res.writeHead(404);
+    res.end();
+  });
+
+  const host = process.env.HOST || 'localhost';
+  const port = Number(process.env.PORT || 4321);
+  await new Promise((done) => app.listen(port, host, done));
+  const server = app.server;
+  if (cluster.isPrimary) console.log(`Throwline is listening on http://${host}:${port}/`);
+  for (const signal of ['SIGINT', 'SIGTERM']) {
+    process.once(signal, () => {
+      server.close(() => process.exit(0));
+      // Keep-alive connections would hold close() open; idle ones can go now.
+      server.closeIdleConnections?.();
+      setTimeout(() => process.exit(0), 3000).unref();
+    });
+  }
+}
+
+function superviseWorkers(count) {
+  let stopping = false;
+  const host = process.env.HOST || 'localhost';
+  const port = process.env.PORT || 4321;
+  let listening = 0;
+  cluster.on('listening', () => {
+    if (++listening === count) console.log(`Throwline is listening on http://${host}:${port}/ (${count} processes)`);
+  });
+  cluster.on('exit', (worker, code, signal) => {
+    if (stopping) {
+      if (Object.keys(cluster.workers ?? {}).length === 0) process.exit(0);
+      return;
+    }
+    console.error(`[throwline] server process ${worker.process.pid} ended (${signal ?? code}); starting another`);
+    cluster.fork();
+  });
+  // Each process migrates lazily on first use; several at once on a new database would race,
+  // so the primary brings the schema up to date first (a no-op when npm start already has).
+  const migrated = spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/cli/prepare-db.ts'], {
+    stdio: 'inherit',
+    env: { ...process.env, SEED_DEMO: '0' },
+  });
+  if (migrated.status !== 0) process.exit(migrated.status ?? 1);
+  for (let i = 0; i < count; i++) cluster.fork();
+  for (const signal of ['SIGINT', 'SIGTERM']) {
+    process.once(signal, () => {
+      stopping = true;
+      for (const worker of Object.values(cluster.workers ?? {})) worker?.process.kill('SIGTERM');
+      setTimeout(() => process.exit(0), 5000).unref();
+    });
+  }
+}
+
+const count = workerCount();
+if (cluster.isPrimary && count > 1) superviseWorkers(count);
+else await serveOneProcess();
