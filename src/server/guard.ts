@@ -1,4 +1,5 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
+import type { Db } from '~/db/client';
 import { memberships, venues } from '~/db/schema';
 import { can, refusalMessage, type Action, type Role, type VenueAccess } from '~/lib/permissions';
 import { getDb } from './db';
@@ -29,6 +30,18 @@ export interface VenueContext {
 
 const NOT_FOUND = 'There is no such venue, or you are not a member of it.';
 
+/** The venue and this person's role there in one prepared query per database handle. */
+const venueQueries = new WeakMap<Db, ReturnType<typeof prepareVenueQuery>>();
+function prepareVenueQuery(db: Db) {
+  return db
+    .select({ id: venues.id, slug: venues.slug, name: venues.name, town: venues.town, role: memberships.role })
+    .from(venues)
+    .leftJoin(memberships, and(eq(memberships.venueId, venues.id), eq(memberships.userId, sql.placeholder('userId'))))
+    .where(eq(venues.slug, sql.placeholder('slug')))
+    .limit(1)
+    .prepare();
+}
+
 /**
  * The venue as this person may see it. A venue they are not a member of answers exactly like
  * one that does not exist, so a URL never reveals which venues exist.
@@ -36,12 +49,9 @@ const NOT_FOUND = 'There is no such venue, or you are not a member of it.';
 export async function loadVenue(user: SessionUser, venueSlug: string | undefined): Promise<VenueContext> {
   if (!venueSlug || venueSlug.length > 100) throw new HttpError(404, NOT_FOUND);
   const db = await getDb();
-  const rows = await db
-    .select({ id: venues.id, slug: venues.slug, name: venues.name, town: venues.town, role: memberships.role })
-    .from(venues)
-    .leftJoin(memberships, and(eq(memberships.venueId, venues.id), eq(memberships.userId, user.id)))
-    .where(eq(venues.slug, venueSlug))
-    .limit(1);
+  let query = venueQueries.get(db);
+  if (!query) venueQueries.set(db, (query = prepareVenueQuery(db)));
+  const rows = await query.all({ slug: venueSlug, userId: user.id });
   const row = rows[0];
   if (!row || (!row.role && !user.isAdmin)) throw new HttpError(404, NOT_FOUND);
   const { role, ...venue } = row;
