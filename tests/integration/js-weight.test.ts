@@ -1,14 +1,10 @@
-import { gzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
+import { pageScriptBytes } from '../helpers/page-scripts';
 
-/**
- * What a phone on venue Wi-Fi downloads before a screen works: every script a page loads at once
- * (script tags, island components and renderers, and what those import statically), gzipped.
- * Dynamic import() is left out on purpose: that is code fetched only when someone uses it.
- */
+/** What a phone on venue Wi-Fi downloads before a screen works (see page-scripts.ts), gzipped. */
 const BUDGET_GZIP_BYTES = 20 * 1024;
 
 let server: TestServer;
@@ -25,37 +21,9 @@ beforeAll(async () => {
 });
 afterAll(() => server?.stop());
 
-function entryScripts(html: string): string[] {
-  const found = new Set<string>();
-  for (const m of html.matchAll(/<script[^>]*\bsrc="([^"]+)"/g)) found.add(m[1]);
-  for (const m of html.matchAll(/\b(?:component-url|renderer-url|before-hydration-url)="([^"]+)"/g)) if (m[1]) found.add(m[1]);
-  // Inline module scripts import their chunks statically too.
-  for (const m of html.matchAll(/<script type="module"[^>]*>([\s\S]*?)<\/script>/g)) for (const i of staticImports(m[1])) found.add(i);
-  return [...found].filter((s) => s.startsWith('/'));
-}
-
-function staticImports(js: string): string[] {
-  const out: string[] = [];
-  // `import x from "…"`, `import "…"`, `export … from "…"`; not `import("…")`.
-  for (const m of js.matchAll(/(?:^|[;\s}])(?:import|export)\s*(?:[\w*{}\s,$]+from\s*)?["']([^"']+)["']/g)) out.push(m[1]);
-  return out;
-}
-
 async function gzipBytesOfPage(client: Client, path: string): Promise<{ bytes: number; files: string[] }> {
-  const res = await client.fetch(path);
-  expect(res.status, path).toBe(200);
-  const queue = entryScripts(await res.text());
-  const seen = new Set<string>();
-  let bytes = 0;
-  while (queue.length) {
-    const url = queue.pop()!;
-    if (seen.has(url)) continue;
-    seen.add(url);
-    const js = await (await client.fetch(url)).text();
-    bytes += gzipSync(js).length;
-    for (const dep of staticImports(js)) queue.push(new URL(dep, `http://x${url}`).pathname);
-  }
-  return { bytes, files: [...seen] };
+  const { gzipBytes, files } = await pageScriptBytes((p) => client.fetch(p), path);
+  return { bytes: gzipBytes, files };
 }
 
 describe(`scripts a screen loads at once stay under ${BUDGET_GZIP_BYTES / 1024} KiB gzipped`, () => {
