@@ -1,5 +1,5 @@
 import { and, asc, count, eq, sql } from 'drizzle-orm';
-import { pages, sections } from '~/db/schema';
+import { pages } from '~/db/schema';
 import { getDb } from './db';
 
 /**
