@@ -21,6 +21,7 @@ import { startServer } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
 import { benchAcoustics } from './acoustics';
 import { addBigVenue } from './big-venue';
+import { benchLighthouse } from './lighthouse';
 import { LOAD_TOOL, runLoad, type LoadResult } from './load-generator';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 5);
@@ -195,4 +196,5 @@ async function main() {
 
 await main();
 benchAcoustics();
+await benchLighthouse();
 if (process.env.BENCH_PIPELINE === '1') spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/cli/bench-upload.ts'], { stdio: 'inherit' });

@@ -74,10 +74,14 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
           • List
         </ToolButton>
         <ToolButton label="Numbered list" active={s.ordered} onClick={() => run().toggleOrderedList().run()}>
-          1. List
+          <svg width="16" height="14" viewBox="0 0 16 14" aria-hidden="true" className="mr-1">
+            <path d="M6 2h10M6 7h10M6 12h10" stroke="currentColor" strokeWidth="1.6" />
+            <path d="M1.5 1 2.5 0.5v3.5M1 12.5h2.5L1 10.2a1 1 0 1 1 2.2-.7" stroke="currentColor" strokeWidth="1" fill="none" />
+          </svg>
+          Numbered
         </ToolButton>
         <ToolButton label="Checklist" active={s.tasks} onClick={() => run().toggleTaskList().run()}>
-          ☐ Checks
+          <span aria-hidden="true">☐</span>&nbsp;Checklist
         </ToolButton>
         {divider}
         {s.inTable ? (

@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView, PageRef } from '~/lib/schemas/file';
-import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
+import { UPLOAD_ACCEPT_WITH_TRACES, uploadPrecheck } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
 import { uploadFile, UploadError } from './upload-file';
 
@@ -39,14 +39,19 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
   function add(fileList: FileList | null) {
     if (!fileList?.length) return;
     const picked = Array.from(fileList).slice(0, single ? 1 : undefined);
-    const added = picked.map<QueuedUpload>((file) => ({
+    const added = picked.map<QueuedUpload>((file) => {
+      const refusal = uploadPrecheck(file);
+      return {
       key: nextKey++,
       file,
       caption: '',
-      status: 'ready',
+      // Flagged on arrival, not when its turn comes: the person can remove it before sending.
+      status: refusal ? 'refused' : 'ready',
+      error: refusal ?? undefined,
       progress: 0,
-      preview: file.type.startsWith('image/') && !/heic|heif/i.test(file.type) ? URL.createObjectURL(file) : null,
-    }));
+      preview: !refusal && file.type.startsWith('image/') && !/heic|heif/i.test(file.type) ? URL.createObjectURL(file) : null,
+      };
+    });
     setQueue((list) => {
       if (single) list.forEach((q) => q.preview && URL.revokeObjectURL(q.preview));
       return single ? added : [...list.filter((q) => q.status !== 'done'), ...added];
@@ -88,7 +93,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
           ref={inputRef}
           id={inputId}
           type="file"
-          accept={UPLOAD_ACCEPT}
+          accept={UPLOAD_ACCEPT_WITH_TRACES}
           multiple={!single}
           className="peer sr-only"
           onChange={(e) => add(e.currentTarget.files)}
@@ -100,7 +105,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
         >
           {pickLabel ?? (single ? 'Choose a photo or PDF' : 'Choose photos or PDFs')}
         </label>
-        <span className="text-sm text-muted">JPEG, PNG, WebP or PDF, up to 25 MiB each (export HEIC photos as JPEG). Location data is removed from photos.</span>
+        <span className="text-sm text-muted">JPEG, PNG, WebP, PDF, or a measurement trace as text columns; up to 25 MiB each (an iPhone's HEIC photos: share them as JPEG). Location data is removed from photos.</span>
       </div>
 
       {queue.length > 0 && (

@@ -40,10 +40,10 @@ export function DiffView({ base, older, newer }: Props) {
           <>Revisions {older} and {newer} have the same text.</>
         )}
       </p>
-      <div className="mt-2 max-h-[70vh] overflow-auto whitespace-pre-wrap rounded-lg border border-line bg-surface p-3 leading-relaxed" data-testid="diff">
+      <div className="mt-2 max-h-[70vh] overflow-auto whitespace-pre-wrap rounded-lg border border-line bg-surface p-3 leading-relaxed" tabIndex={0} role="region" aria-label="Changes between the two revisions" data-testid="diff">
         {shown.map((p, i) =>
           p.kind === 'fold' ? (
-            <button key={i} type="button" onClick={() => setWhole(true)} className="my-1 block w-full rounded-md bg-sunken px-2 py-2 text-left text-sm text-muted hover:text-fg">
+            <button key={i} type="button" onClick={() => setWhole(true)} className="my-1 block min-h-11 w-full rounded-md bg-sunken px-2 py-2 text-left text-sm text-muted hover:text-fg">
               ⋯ {p.lines} unchanged line{p.lines === 1 ? '' : 's'} (show)
             </button>
           ) : p.kind === 'added' ? (
@@ -65,7 +65,7 @@ export function DiffView({ base, older, newer }: Props) {
         </button>
       )}
       <p className="mt-1 text-xs text-muted">
-        <ins className="bg-ok/20 underline decoration-ok">Underlined</ins> words were added, <del className="bg-danger/15 decoration-danger">struck-through</del> words removed.
+        <ins className="bg-ok/20 text-fg underline decoration-ok">Underlined</ins> words were added, <del className="bg-danger/15 text-fg decoration-danger">struck-through</del> words removed.
       </p>
     </div>
   );
