@@ -100,7 +100,8 @@ function superviseWorkers(count) {
   const host = process.env.HOST || 'localhost';
   const port = process.env.PORT || 4321;
   let listening = 0;
-  const fork = () => cluster.fork({ MALLOC_ARENA_MAX: process.env.MALLOC_ARENA_MAX ?? '2' });
+  // Workers see the resolved count ("auto" becomes a number): the storage sweep depends on it.
+  const fork = () => cluster.fork({ MALLOC_ARENA_MAX: process.env.MALLOC_ARENA_MAX ?? '2', WEB_CONCURRENCY: String(count) });
   cluster.on('listening', () => {
     if (++listening === count) console.log(`Throwline is listening on http://${host}:${port}/${count > 1 ? ` (${count} processes)` : ''}`);
   });

@@ -1,4 +1,3 @@
-import cluster from 'node:cluster';
 import { mkdir, readdir, rm, stat } from 'node:fs/promises';
 import { join } from 'node:path';
 import { eq } from 'drizzle-orm';
@@ -41,7 +40,8 @@ export function ensureStorageReady(): Promise<void> {
 const IN_FLIGHT_MS = 30 * 60 * 1000;
 
 async function oldEnough(path: string): Promise<boolean> {
-  if (!cluster.isWorker) return true;
+  // src/cli/serve.mjs hands its workers the resolved number of processes.
+  if (Number(process.env.WEB_CONCURRENCY ?? '1') <= 1) return true;
   try {
     return Date.now() - (await stat(path)).mtimeMs > IN_FLIGHT_MS;
   } catch {
