@@ -75,11 +75,8 @@ async function serveOneProcess() {
     }
     next();
   });
-  app.use(assets, compress, (req, res, next) => handler(req, res, next));
-  app.use((_req, res) => {
-    res.writeHead(404);
-    res.end();
-  });
+  // No `next` for the adapter: with none it renders the app's own 404 page for unknown paths.
+  app.use(assets, compress, (req, res) => handler(req, res));
 
   const host = process.env.HOST || 'localhost';
   const port = Number(process.env.PORT || 4321);
