@@ -6,13 +6,16 @@ import mdx from '@astrojs/mdx';
 import tailwindcss from '@tailwindcss/vite';
 import auth from 'auth-astro';
 import { CSP_DIRECTIVES, SCRIPT_SOURCES, STYLE_SOURCES } from './src/server/security-policy.mjs';
+import { precompress } from './src/cli/precompress.mjs';
 
 export default defineConfig({
   output: 'server',
   // Lets several working copies of the test suite build side by side (see DEVELOPERS.md).
   outDir: process.env.THROWLINE_BUILD_DIR ?? './dist',
-  adapter: node({ mode: 'standalone' }),
-  integrations: [react(), mdx(), auth({ configFile: './src/auth.config.ts', injectEndpoints: false })],
+  // Middleware mode: src/cli/serve.mjs puts static files, compression and the security headers
+  // in front of it.
+  adapter: node({ mode: 'middleware' }),
+  integrations: [react(), mdx(), auth({ configFile: './src/auth.config.ts', injectEndpoints: false }), precompress()],
   // The node adapter ignores the Host header unless it matches allowedDomains, and the URL's
   // origin then reads "localhost". The server is meant to run behind whatever name the venue
   // gives it, so any host is accepted here. Astro's own origin check covers only form posts and

@@ -12,9 +12,10 @@ buildIfStale();
 const host = process.env.HOST || 'localhost';
 const port = process.env.PORT || '4321';
 console.log(`→ Throwline is starting on http://${host}:${port}/`);
+// Production mode always: React and Astro choose their runtime from NODE_ENV when loaded.
 const server = spawn(process.execPath, [SERVE_SCRIPT], {
   stdio: 'inherit',
-  env: { ...process.env, HOST: host, PORT: port },
+  env: { ...process.env, HOST: host, PORT: port, NODE_ENV: 'production' },
 });
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => process.exit(code ?? 0));

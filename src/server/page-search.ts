@@ -17,6 +17,9 @@ interface HitRow {
   markedBody: string;
 }
 
+/** Most hits one search answers: the results page shows this many, suggestions fewer. */
+export const SEARCH_PAGE_LIMIT = 50;
+
 /** BM25 with a title match counting ten times a body match. */
 const RANKING = 'bm25(10.0, 1.0)';
 const SNIPPET_TOKENS = 14;

@@ -18,6 +18,55 @@ export function sessionCookieName(secure: boolean): string {
   return secure ? '__Secure-authjs.session-token' : 'authjs.session-token';
 }
 
+interface DecodedSession {
+  sub: string;
+  /** When this session stops being valid, in ms: the sooner of the token's exp and 12 h after sign-in. */
+  validUntilMs: number;
+  /** The person's session epoch when the cookie was issued (see endSessionsOf). */
+  epoch: number;
+}
+
+/**
+ * Decrypting the session cookie (JWE) costs more than the rest of a cached page read. A cookie's
+ * contents never change, so its decoded subject and end are kept, keyed by the cookie text; the
+ * end is checked again on every use. Only the decoding is saved: the person is still read from
+ * the database on every request, so a removed account or changed admin flag applies at once.
+ */
+const MAX_DECODED = 2000;
+const decoded = new Map<string, DecodedSession>();
+
+function cookieValue(header: string, name: string): string | undefined {
+  // Auth.js splits large tokens into name.0, name.1…; those are rare, so leave them to getToken.
+  for (const part of header.split(';')) {
+    const eqAt = part.indexOf('=');
+    if (eqAt > 0 && part.slice(0, eqAt).trim() === name) return part.slice(eqAt + 1).trim();
+  }
+  return undefined;
+}
+
+async function decodeSession(request: Request, cookieName: string, secure: boolean): Promise<DecodedSession | null> {
+  const raw = cookieValue(request.headers.get('cookie') ?? '', cookieName);
+  const known = raw ? decoded.get(raw) : undefined;
+  if (known) return known.validUntilMs > Date.now() ? known : null;
+  let token: Record<string, unknown> | null;
+  try {
+    token = await getToken({ req: request, secret: getConfig().AUTH_SECRET, secureCookie: secure, salt: cookieName });
+  } catch {
+    return null;
+  }
+  if (!token || typeof token.sub !== 'string') return null;
+  const authTime = Number(token.authTime);
+  if (!Number.isFinite(authTime)) return null;
+  const exp = Number(token.exp);
+  const validUntilMs = Math.min(authTime + SESSION_LIFETIME_SECONDS * 1000, Number.isFinite(exp) ? exp * 1000 : Infinity);
+  const session = { sub: token.sub, validUntilMs, epoch: Number(token.epoch ?? 0) };
+  if (raw) {
+    if (decoded.size >= MAX_DECODED) decoded.delete(decoded.keys().next().value!);
+    decoded.set(raw, session);
+  }
+  return validUntilMs > Date.now() ? session : null;
+}
+
 /**
  * Reads the Auth.js session cookie directly (decrypting the JWT) rather than through a full
  * Auth.js request per page, and loads the person fresh from the database so a removed account
@@ -27,23 +76,16 @@ export async function readSessionUser(request: Request): Promise<SessionUser | n
   const secure = new URL(request.url).protocol === 'https:';
   const cookieName = sessionCookieName(secure);
   if (!request.headers.get('cookie')?.includes(cookieName)) return null;
-  let token: Record<string, unknown> | null;
-  try {
-    token = await getToken({ req: request, secret: getConfig().AUTH_SECRET, secureCookie: secure, salt: cookieName });
-  } catch {
-    return null;
-  }
-  if (!token || typeof token.sub !== 'string') return null;
-  const authTime = Number(token.authTime);
-  if (!Number.isFinite(authTime) || Date.now() - authTime > SESSION_LIFETIME_SECONDS * 1000) return null;
+  const session = await decodeSession(request, cookieName, secure);
+  if (!session) return null;
   const db = await getDb();
   const row = await db.query.users.findFirst({
-    where: eq(users.id, token.sub),
+    where: eq(users.id, session.sub),
     columns: { id: true, email: true, name: true, isAdmin: true, sessionEpoch: true },
   });
   if (!row) return null;
   // A cookie issued before the last sign-out, password change or removal is refused here.
-  if (Number(token.epoch ?? 0) !== row.sessionEpoch) return null;
+  if (session.epoch !== row.sessionEpoch) return null;
   return { id: row.id, email: row.email, name: row.name, isAdmin: row.isAdmin };
 }
 

@@ -7,6 +7,8 @@ import { ROOT, TEMPLATE_DB, TMP_ROOT } from './paths';
 
 export interface TestServer {
   url: string;
+  /** The process started (with WEB_CONCURRENCY > 1, the primary of its worker processes). */
+  pid: number;
   authSecret: string;
   dir: string;
   dbPath: string;
@@ -51,7 +53,6 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
       UPLOADS_DIR: uploadsDir,
       AUTH_SECRET: TEST_AUTH_SECRET,
       SEED_DEMO: '0',
-      NODE_ENV: 'production',
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -73,6 +74,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
   }
   return {
     url,
+    pid: child.pid!,
     authSecret: env.AUTH_SECRET ?? TEST_AUTH_SECRET,
     dir,
     dbPath,

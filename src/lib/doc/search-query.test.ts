@@ -7,19 +7,32 @@ describe('toFtsQuery', () => {
   });
 
   it.each([
-    ["' OR 1=1--", '"OR" "1=1--"*'],
-    ['NEAR(a b)', '"NEAR(a" "b)"*'],
-    ['a"b', '"a""b"*'],
+    ["' OR 1=1--", '"OR" "1=1--"'],
+    ['NEAR(a bc)', '"NEAR(a" "bc)"'],
+    ['NEAR(a bcd)', '"NEAR(a" "bcd)"*'],
+    ['a"bcd', '"a""bcd"*'],
     ['"unbalanced', '"""unbalanced"*'],
     ['-minus', '"-minus"*'],
-    ['title:x', '"title:x"*'],
-    ['x AND y', '"x" "AND" "y"*'],
+    ['title:x', '"title:x"'],
+    ['title:xlr', '"title:xlr"*'],
+    ['x AND y', '"x" "AND" "y"'],
   ])('%s is searched as text', (input, expected) => {
     expect(toFtsQuery(input)).toBe(expected);
   });
 
   it.each(['', '   ', '*', '-', '"', "'", '* - " ^'])('%j has no words to search for', (input) => {
     expect(toFtsQuery(input)).toBeNull();
+  });
+
+  it('matches a last word of one or two letters whole, from three letters on as a prefix', () => {
+    expect(toFtsQuery('s')).toBe('"s"');
+    expect(toFtsQuery('st')).toBe('"st"');
+    expect(toFtsQuery('s*')).toBe('"s*"');
+    expect(toFtsQuery('sta')).toBe('"sta"*');
+    expect(toFtsQuery('stage 2')).toBe('"stage" "2"');
+    expect(toFtsQuery('stage-2')).toBe('"stage-2"');
+    expect(toFtsQuery('2-sta')).toBe('"2-sta"*');
+    expect(toFtsQuery('ü')).toBe('"ü"');
   });
 
   it('caps the number of terms', () => {
