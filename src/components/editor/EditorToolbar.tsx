@@ -3,6 +3,7 @@ import { useEffect, useRef, useState } from 'react';
 import { LinkForm } from './LinkForm';
 import { PhotoDialog, type PhotoTarget } from './PhotoDialog';
 import { ToolButton } from './ToolButton';
+import { CROSSOVER_BLOCK, DELAY_BLOCK, EQ_BLOCK, newCrossoverBlock, newDelayBlock, newEqBlock } from '~/lib/doc/blocks/block-data';
 
 type Block = 'p' | '1' | '2' | '3' | '4';
 
@@ -107,6 +108,16 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
             ▦ Table
           </ToolButton>
         )}
+        {divider}
+        <ToolButton label="Insert an EQ block" onClick={() => run().insertContent({ type: EQ_BLOCK, attrs: newEqBlock() }).run()} testId="insert-eq">
+          EQ
+        </ToolButton>
+        <ToolButton label="Insert a crossover block" onClick={() => run().insertContent({ type: CROSSOVER_BLOCK, attrs: newCrossoverBlock() }).run()} testId="insert-crossover">
+          X-over
+        </ToolButton>
+        <ToolButton label="Insert a delay block" onClick={() => run().insertContent({ type: DELAY_BLOCK, attrs: newDelayBlock() }).run()} testId="insert-delay">
+          Delay
+        </ToolButton>
         {divider}
         <ToolButton label="Undo" disabled={!s.canUndo} onClick={() => run().undo().run()}>
           ↶ Undo

@@ -1,6 +1,9 @@
 import { useMemo, useState } from 'react';
 import useSWR from 'swr';
 import { diffStats, foldUnchanged, wordDiff } from '~/lib/doc/word-diff';
+import { docPlainText } from '~/lib/doc/render-html';
+import { structuralDiff } from '~/lib/doc/structural-diff';
+import { StructuralChanges } from './StructuralChanges';
 import { fetchJson } from './fetch-json';
 import type { RevisionFull } from './types';
 
@@ -18,9 +21,15 @@ export function DiffView({ base, older, newer }: Props) {
   const a = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${older}`, fetchJson);
   const b = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${newer}`, fetchJson);
   const [whole, setWhole] = useState(false);
-  const parts = useMemo(
-    () => (a.data && b.data ? wordDiff(a.data.revision.plainText, b.data.revision.plainText) : null),
+  // Text from the documents themselves, so blocks saved before their words were indexed still compare.
+  const texts = useMemo(
+    () => (a.data && b.data ? [docPlainText(a.data.revision.doc), docPlainText(b.data.revision.doc)] : null),
     [a.data, b.data],
+  );
+  const parts = useMemo(() => (texts ? wordDiff(texts[0]!, texts[1]!) : null), [texts]);
+  const changes = useMemo(
+    () => (a.data && b.data && texts ? structuralDiff(a.data.revision.doc, b.data.revision.doc, texts[0] !== texts[1]) : []),
+    [a.data, b.data, texts],
   );
   if (a.error || b.error) return <p className="text-danger">{(a.error ?? b.error).message}</p>;
   if (!parts) return <p className="text-muted">Comparing…</p>;
@@ -36,10 +45,13 @@ export function DiffView({ base, older, newer }: Props) {
             From revision {older} to {newer}: <span className="font-semibold text-ok">{stats.added} {stats.added === 1 ? 'word' : 'words'} added</span>,{' '}
             <span className="font-semibold text-danger">{stats.removed} removed</span>.
           </>
+        ) : changes.length > 0 ? (
+          <>From revision {older} to {newer} the words are the same; what changed is listed below.</>
         ) : (
-          <>Revisions {older} and {newer} have the same text.</>
+          <>Revisions {older} and {newer} are identical.</>
         )}
       </p>
+      <StructuralChanges changes={changes} />
       <div className="mt-2 max-h-[70vh] overflow-auto whitespace-pre-wrap rounded-lg border border-line bg-surface p-3 leading-relaxed" tabIndex={0} role="region" aria-label="Changes between the two revisions" data-testid="diff">
         {shown.map((p, i) =>
           p.kind === 'fold' ? (

@@ -1,3 +1,5 @@
+import type { PmNode } from '~/lib/doc/types';
+
 export interface RevisionSummary {
   number: number;
   summary: string;
@@ -8,6 +10,7 @@ export interface RevisionSummary {
 
 export interface RevisionFull extends RevisionSummary {
   plainText: string;
+  doc: PmNode;
 }
 
 export interface HistoryAnswer {

@@ -1,6 +1,7 @@
 import { escapeHtml } from './escape-html';
 import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
 import type { PmMark, PmNode } from './types';
+import { blockPlainText, processorBlockRenderers } from './render-blocks';
 
 /**
  * Renders a stored page document to HTML for the read view, on the server, with no editor code.
@@ -11,8 +12,10 @@ import type { PmMark, PmNode } from './types';
 export type BlockRenderer = (node: PmNode) => string;
 
 export interface RenderOptions {
-  /** Renderers for custom block nodes (processor blocks), keyed by node type. */
+  /** Renderers for custom block nodes, keyed by node type; the processor blocks have theirs by default. */
   blocks?: Record<string, BlockRenderer>;
+  /** Prefix for the ids inside processor-block plots, when one HTML page shows several renders. */
+  idPrefix?: string;
   /**
    * Whether an image's file can still be served. A photo deleted after a page used it is shown
    * as a short note instead of a broken image.
@@ -71,7 +74,8 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
   return html;
 }
 
-export function renderDocHtml(doc: PmNode, options: RenderOptions = {}): string {
+export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
+  const options = { ...given, blocks: { ...processorBlockRenderers(given.idPrefix), ...given.blocks } };
   const out: string[] = [];
   // Iterative, so a deeply nested stored document cannot overflow the stack.
   const stack: (PmNode | { close: string })[] = [doc];
@@ -158,6 +162,8 @@ export function docPlainText(doc: PmNode): string {
       continue;
     }
     if (node.type === 'hardBreak') parts.push('\n');
+    const block = blockPlainText(node);
+    if (block) parts.push(`\n${block}\n`);
     if (node.type === 'tableCell' || node.type === 'tableHeader') parts.push(' ');
     if (BLOCK_BREAK.has(node.type)) parts.push('\n');
     const children = node.content ?? [];
