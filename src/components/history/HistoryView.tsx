@@ -3,6 +3,7 @@ import useSWR from 'swr';
 import { DiffView } from './DiffView';
 import { fetchJson } from './fetch-json';
 import { RevisionList } from './RevisionList';
+import { useOlderRevisions } from './use-older-revisions';
 import type { HistoryAnswer } from './types';
 
 export interface HistoryViewProps {
@@ -11,15 +12,18 @@ export interface HistoryViewProps {
   mayRestore: boolean;
   /** The list as the server rendered it, shown until SWR has fetched a fresh one. */
   initial: HistoryAnswer;
+  /** The history page the server rendered starts below this revision (null: the newest). */
+  before?: number | null;
 }
 
 type Message = { kind: 'ok' | 'error'; text: string } | null;
 
 /** A page's history: pick two revisions, read the word-level diff, restore an old one. */
-export default function HistoryView({ venue, page, mayRestore, initial }: HistoryViewProps) {
+export default function HistoryView({ venue, page, mayRestore, initial, before = null }: HistoryViewProps) {
   const base = `/api/venues/${venue}/pages/${page}`;
-  const { data, error, mutate } = useSWR<HistoryAnswer>(`${base}/revisions`, fetchJson, { fallbackData: initial });
-  const revisions = data?.revisions ?? [];
+  const { data, error, mutate } = useSWR<HistoryAnswer>(`${base}/revisions${before ? `?before=${before}` : ''}`, fetchJson, { fallbackData: initial });
+  const older = useOlderRevisions(base, data?.nextBefore ?? null);
+  const revisions = older.after(data?.revisions ?? []);
   const current = data?.page.currentRevision ?? 0;
   const [pair, setPair] = useState<{ older: number; newer: number } | null>(current > 1 ? { older: current - 1, newer: current } : null);
   const [restoring, setRestoring] = useState<number | null>(null);
@@ -108,6 +112,7 @@ export default function HistoryView({ venue, page, mayRestore, initial }: Histor
           restoring={restoring}
           onCompare={(older, newer) => setPair({ older, newer })}
           onRestore={restore}
+          older={older}
         />
       </section>
     </div>

@@ -16,4 +16,6 @@ export interface RevisionFull extends RevisionSummary {
 export interface HistoryAnswer {
   page: { slug: string; title: string; currentRevision: number };
   revisions: RevisionSummary[];
+  /** Where the next, older page of the history starts; null when revision 1 is listed. */
+  nextBefore: number | null;
 }

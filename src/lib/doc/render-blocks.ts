@@ -26,6 +26,8 @@ export interface BlockContext {
   traces?: TraceLookup;
   /** Link to download the computed curve of the n-th processor block (1-based, document order). */
   curveHref?: (blockNumber: number) => string;
+  /** Where a trace file downloads from (a guest's pass-scoped route); /files/<id> by default. */
+  fileUrl?: (fileId: string) => string;
 }
 
 const e = (text: string) => escapeHtml(text);
@@ -94,7 +96,7 @@ function renderEq(block: EqBlockAttrs, id: string, ctx: BlockContext = {}, block
     figure(eqPlotSvg(block, id, undefined, curves, ctx.traces), `${Q_CONVENTION}${prototypeNote}`),
     `<div class="tl-values" tabindex="0" role="region" aria-label="Values"><table><caption>Bands at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">#</th><th scope="col">Type</th><th scope="col" class="num">Freq (Hz)</th><th scope="col" class="num">Gain (dB)</th><th scope="col" class="num">Q / S</th><th scope="col" class="num">Width (oct)</th><th scope="col" class="num">Half-gain width at ${rateLabel(block.sampleRate)} (oct)</th><th scope="col">On</th></tr></thead><tbody>${rows || '<tr><td colspan="8">No bands.</td></tr>'}</tbody></table></div>`,
     `<p>Output gain ${signedDb(block.outputGain)}, polarity ${block.polarity}, sample rate ${rateLabel(block.sampleRate)}.</p>`,
-    traceTable(block, ctx.traces),
+    traceTable(block, ctx.traces, ctx.fileUrl),
     downloadLink(ctx, blockNumber),
     note(block.note),
     '</section>',
@@ -140,7 +142,7 @@ function renderCrossover(block: CrossoverBlockAttrs, id: string, ctx: BlockConte
     `<div id="${id}-h">${title('Crossover', block.label)}</div>`,
     figure(crossoverPlotSvg(block, id, undefined, ctx.traces), 'Ways and their electrical sum, as if the drivers were at one point; the acoustic sum also depends on where they are.'),
     `<div class="tl-values" tabindex="0" role="region" aria-label="Values"><table><caption>Ways at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">Way</th><th scope="col">High-pass</th><th scope="col">Low-pass</th><th scope="col" class="num">Gain (dB)</th><th scope="col">Polarity</th><th scope="col" class="num">Delay (ms)</th></tr></thead><tbody>${rows}</tbody></table></div>`,
-    traceTable(block, ctx.traces),
+    traceTable(block, ctx.traces, ctx.fileUrl),
     downloadLink(ctx, blockNumber),
     note(block.note),
     '</section>',

@@ -1,5 +1,5 @@
 import { escapeHtml } from './escape-html';
-import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
+import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
 import { blockPlainText, processorBlockRenderers, type BlockContext } from './render-blocks';
 
@@ -23,6 +23,11 @@ export interface RenderOptions {
   isImageAvailable?: (src: string) => boolean;
   /** Measured traces and curve downloads for the processor blocks (see render-blocks.ts). */
   blockContext?: BlockContext;
+  /**
+   * Where the reader fetches an image of this instance from. A guest has no session, so the
+   * guest view points images at its own pass-scoped file route instead of /files/….
+   */
+  imageUrl?: (src: string) => string;
 }
 
 const SIMPLE_BLOCKS: Record<string, string> = {
@@ -63,9 +68,10 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
         break;
       case 'link': {
         const href = mark.attrs?.href;
-        if (isSafeLinkHref(href)) {
-          const external = /^https?:/i.test(href);
-          html = `<a${attr('href', href)}${external ? ' rel="noopener noreferrer nofollow" target="_blank"' : ''}>${html}</a>`;
+        const kind = linkKind(href);
+        if (kind) {
+          const external = kind === 'external';
+          html = `<a${attr('href', href as string)}${external ? ' rel="noopener noreferrer nofollow" target="_blank"' : ''}>${html}</a>`;
         }
         break;
       }
@@ -144,7 +150,7 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
         return [`<span class="missing-photo" role="note">Photo removed${alt ? `: ${escapeHtml(alt)}` : ''}</span>`, ''];
       }
       const title = typeof node.attrs?.title === 'string' ? node.attrs.title : '';
-      return [`<img${attr('src', src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
+      return [`<img${attr('src', options.imageUrl ? options.imageUrl(src) : src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
     }
     default:
       // Unknown nodes keep their text but lose their markup.

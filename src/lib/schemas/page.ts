@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { SLUG_PATTERN } from '~/lib/slug';
+import { displayText } from './display-text';
 
 /**
  * Request bodies for pages, revisions, sections and search, shared by the editor island and the
@@ -19,17 +20,12 @@ function strictBody<T extends z.core.$ZodLooseShape>(shape: T) {
   });
 }
 
-const title = z
-  .string({ error: 'Give the page a title (text).' })
-  .trim()
-  .min(1, 'Give the page a title.')
-  .max(140, 'Keep the title under 140 characters.');
+const title = displayText('the title', { min: 1, max: 140, minMessage: 'Give the page a title.' });
 
 const summary = z
   .string({ error: 'The summary must be text.' })
-  .trim()
-  .max(200, 'Keep the summary to one line (under 200 characters).')
-  .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.');
+  .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.')
+  .pipe(displayText('the summary', { max: 200, maxMessage: 'Keep the summary to one line (under 200 characters).' }));
 
 const sectionSlug = z
   .string({ error: 'Choose a section.' })
@@ -86,11 +82,7 @@ export const SearchQuerySchema = z.object({
     .optional(),
 });
 
-const sectionTitle = z
-  .string({ error: 'Give the section a title (text).' })
-  .trim()
-  .min(1, 'Give the section a title.')
-  .max(60, 'Keep the section title under 60 characters.');
+const sectionTitle = displayText('the section title', { min: 1, max: 60, minMessage: 'Give the section a title.' });
 
 export const SectionCreateSchema = strictBody({
   title: sectionTitle,
@@ -107,3 +99,19 @@ export const SectionUpdateSchema = strictBody({
   move: z.enum(['up', 'down'], { error: 'move is "up" or "down".' }).optional(),
 }).refine((v) => v.title !== undefined || v.move !== undefined, 'Send a new title or a move ("up" or "down").');
 export type SectionUpdate = z.infer<typeof SectionUpdateSchema>;
+
+/** Paging of a page's history: `before` a revision number, `limit` revisions per page. */
+export const HistoryQuerySchema = z.object({
+  before: z.coerce
+    .number({ error: 'before must be a revision number.' })
+    .int('before must be a whole revision number.')
+    .min(2, 'before must be a revision number of 2 or more (revision 1 has nothing older).')
+    .max(1_000_000_000, 'before is past any revision number.')
+    .optional(),
+  limit: z.coerce
+    .number({ error: 'limit must be a number.' })
+    .int('limit must be a whole number.')
+    .min(1, 'limit must be at least 1.')
+    .max(500, 'limit may be at most 500.')
+    .optional(),
+});

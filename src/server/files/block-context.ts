@@ -1,16 +1,19 @@
 /**
- * What the read view needs to draw a page's processor blocks beyond the document itself: the
- * measured traces they attach (of this venue only), and where each block's curve downloads.
+ * What the read view needs to draw a page's processor blocks beyond the document itself: which
+ * measured traces they attach, and where each block's computed curve downloads.
  */
-import type { BlockContext } from '~/lib/doc/render-blocks';
-import type { PmNode } from '~/lib/doc/types';
-import { fileRefsInDoc } from '~/server/page-file-refs';
-import { loadVenueTraces } from './trace-data';
 
-export async function blockContextFor(venue: { id: string; slug: string }, pageSlug: string, doc: PmNode): Promise<BlockContext> {
-  const ids = fileRefsInDoc(doc).filter((r) => r.kind === 'trace').map((r) => r.fileId);
-  return {
-    traces: await loadVenueTraces(venue.id, ids),
-    curveHref: (n) => `/venues/${encodeURIComponent(venue.slug)}/${encodeURIComponent(pageSlug)}/curves/${n}.txt`,
-  };
+/**
+ * Trace ids attached to blocks, read from the stored JSON text without parsing it (the read
+ * cache exists to avoid that). Only a TraceRef has a "fileId" key; typed text containing those
+ * characters is stored with its quotes escaped, so it cannot match.
+ */
+export function traceIdsInDocText(docJson: string): Set<string> {
+  const ids = new Set<string>();
+  for (const m of docJson.matchAll(/"fileId":"([A-Za-z0-9_-]{1,80})"/g)) ids.add(m[1]!);
+  return ids;
+}
+
+export function curveHrefFor(venueSlug: string, pageSlug: string): (n: number) => string {
+  return (n) => `/venues/${encodeURIComponent(venueSlug)}/${encodeURIComponent(pageSlug)}/curves/${n}.txt`;
 }

@@ -5,7 +5,9 @@ import { files, venues } from '~/db/schema';
 import { withExtension } from '~/lib/file-name';
 import { FILE_VARIANTS, type FileVariant } from '~/lib/schemas/file';
 import { getDb } from '~/server/db';
-import { loadVenue, requirePermission, requireUser } from '~/server/guard';
+import { isGuest, type Guest } from '~/lib/permissions';
+import { isAdvanceFile } from '~/server/advance';
+import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from '~/server/guard';
 import { HttpError } from '~/server/http';
 import type { SessionUser } from '~/server/session';
 import { contentDisposition } from './content-disposition';
@@ -19,8 +21,8 @@ const FILE_ID = /^[A-Za-z0-9_-]{1,80}$/;
  * The file row, for people who may read its venue. A file of a venue the person is not a member
  * of answers exactly like a file that does not exist.
  */
-export async function loadReadableFile(user: SessionUser | null | undefined, fileId: string | undefined): Promise<FileRow> {
-  const signedIn = requireUser(user);
+export async function loadReadableFile(principal: RequestPrincipal, fileId: string | undefined): Promise<FileRow> {
+  const signedIn: SessionUser | Guest = isGuest(principal) ? principal : requireUser(principal);
   if (!fileId || !FILE_ID.test(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
   const db = await getDb();
   const [found] = await db.select({ file: files, venueSlug: venues.slug }).from(files).innerJoin(venues, eq(venues.id, files.venueId)).where(eq(files.id, fileId)).limit(1);
@@ -31,6 +33,12 @@ export async function loadReadableFile(user: SessionUser | null | undefined, fil
   } catch (err) {
     if (err instanceof HttpError && err.status === 404) throw new HttpError(404, FILE_NOT_FOUND);
     throw err;
+  }
+  if (isGuest(signedIn)) {
+    // A guest may fetch exactly the files the advance sheet shows, nothing else of the venue.
+    requirePermission(signedIn, 'advance.read', access);
+    if (!(await isAdvanceFile(found.file.venueId, found.file.id))) throw new HttpError(404, FILE_NOT_FOUND);
+    return found.file;
   }
   requirePermission(signedIn, 'venue.read', access);
   return found.file;

@@ -61,7 +61,7 @@ export function traceCurves(attrs: { traces?: TraceRef[]; compare?: TraceCompare
 }
 
 /** The table of attached traces with their notes and download links; empty when there are none. */
-export function traceTable(attrs: { traces?: TraceRef[]; compare?: TraceCompare | null }, lookup: TraceLookup | undefined): string {
+export function traceTable(attrs: { traces?: TraceRef[]; compare?: TraceCompare | null }, lookup: TraceLookup | undefined, fileUrl = (id: string) => `/files/${id}`): string {
   const refs = blockTraces(attrs);
   if (refs.length === 0) return '';
   const rows = refs
@@ -69,7 +69,7 @@ export function traceTable(attrs: { traces?: TraceRef[]; compare?: TraceCompare 
       const data = lookup?.get(ref.fileId);
       const smoothing = ref.smoothing ? `1/${ref.smoothing} oct` : 'none';
       const file = data
-        ? `<a href="/files/${e(ref.fileId)}?download=1" download>${e(data.originalName)}</a> (${data.trace.freqHz.length.toLocaleString('en')} points)`
+        ? `<a href="${e(fileUrl(ref.fileId))}?download=1" download>${e(data.originalName)}</a> (${data.trace.freqHz.length.toLocaleString('en')} points)`
         : 'unavailable: the file was removed';
       return `<tr><th scope="row">${e(traceName(ref, i))}</th><td>${e(ref.date) || '—'}</td><td>${e(ref.position) || '—'}</td><td class="num">${fixed(ref.offsetDb, 1)}</td><td>${smoothing}</td><td>${file}</td></tr>`;
     })
