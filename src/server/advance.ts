@@ -1,6 +1,8 @@
 import { and, asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
 import { isCheckStale } from '~/lib/check-staleness';
+import { traceIdsInDocText } from './files/block-context';
+import { loadVenueTraces } from './files/trace-data';
 import { renderDocHtml } from '~/lib/doc/render-html';
 import type { PmNode } from '~/lib/doc/types';
 import { recordAudit } from './audit';
@@ -47,8 +49,14 @@ export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = 
   const rows = await advanceRows(venue.id);
   const now = options.now ?? new Date();
   const wanted = new Set<string>();
-  for (const r of rows) for (const id of fileIdsInDoc(r.doc ?? '')) wanted.add(id);
-  const available = await availableFileIds(venue.id, wanted);
+  const traceIds = new Set<string>();
+  for (const r of rows) {
+    for (const id of fileIdsInDoc(r.doc ?? '')) wanted.add(id);
+    for (const id of traceIdsInDocText(r.doc ?? '')) traceIds.add(id);
+  }
+  const available = await availableFileIds(venue.id, [...wanted, ...traceIds]);
+  const traces = await loadVenueTraces(venue.id, [...traceIds].filter((id) => available.has(id)));
+  const fileUrl = (id: string) => (options.imageUrl ? options.imageUrl(`/files/${id}`) : `/files/${id}`);
   return rows.map((r) => {
     const doc = r.doc ? (JSON.parse(r.doc) as PmNode) : null;
     const fileIds = [...fileIdsInDoc(r.doc ?? '')].filter((id) => available.has(id));
@@ -62,7 +70,7 @@ export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = 
       checkedBy: r.checkedAt ? (r.checkedByName ?? 'a former member') : null,
       checkStale: isCheckStale(r.sectionSlug, r.checkedAt, now, venue.checkStaleMonths),
       fileIds,
-      html: doc ? renderDocHtml(doc, { isImageAvailable: (src) => available.has(fileIdOfUrl(src)), imageUrl: options.imageUrl }) : '',
+      html: doc ? renderDocHtml(doc, { isImageAvailable: (src) => available.has(fileIdOfUrl(src)), imageUrl: options.imageUrl, blockContext: { traces, fileUrl } }) : '',
     };
   });
 }
@@ -72,7 +80,7 @@ export type SheetPage = Awaited<ReturnType<typeof loadAdvanceSheet>>[number];
 /** Whether a file of this venue is used by a page on its advance sheet (what a guest may fetch). */
 export async function isAdvanceFile(venueId: string, fileId: string): Promise<boolean> {
   const rows = await advanceRows(venueId);
-  return rows.some((r) => fileIdsInDoc(r.doc ?? '').has(fileId));
+  return rows.some((r) => fileIdsInDoc(r.doc ?? '').has(fileId) || traceIdsInDocText(r.doc ?? '').has(fileId));
 }
 
 /** Every live page with whether it is on the sheet, for the manager's selection screen. */

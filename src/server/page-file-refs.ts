@@ -1,5 +1,6 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { files } from '~/db/schema';
+import { blockTraces, CROSSOVER_BLOCK, EQ_BLOCK, type TraceRef } from '~/lib/doc/blocks/block-data';
 import type { PmNode } from '~/lib/doc/types';
 import type { Tx } from './db';
 import { fileIdsInDoc } from './files/file-usage';
@@ -7,7 +8,7 @@ import { HttpError } from './http';
 
 /** One place a page document points at a stored file: a photo, or a link to /files/…. */
 export interface FileRef {
-  kind: 'photo' | 'link';
+  kind: 'photo' | 'link' | 'trace';
   fileId: string;
   url: string;
   /** What the person sees: the photo's description or the link's text. */
@@ -34,6 +35,12 @@ export function fileRefsInDoc(doc: PmNode): FileRef[] {
     const node = stack.pop()!;
     if (node.type === 'image') add('photo', node.attrs?.src, typeof node.attrs?.alt === 'string' ? node.attrs.alt : '');
     for (const mark of node.marks ?? []) if (mark.type === 'link') add('link', mark.attrs?.href, node.text ?? '');
+    // Measured traces attached to EQ and crossover blocks are files the page shows too.
+    if (node.type === EQ_BLOCK || node.type === CROSSOVER_BLOCK) {
+      for (const t of blockTraces(node.attrs as { traces?: TraceRef[] })) {
+        if (typeof t?.fileId === 'string') refs.push({ kind: 'trace', fileId: t.fileId, url: `/files/${t.fileId}`, label: typeof t.label === 'string' ? t.label : '' });
+      }
+    }
     if (node.content) for (let i = node.content.length - 1; i >= 0; i--) stack.push(node.content[i]);
   }
   return refs;
@@ -47,10 +54,12 @@ function quoted(label: string): string {
 /** What is being saved: a new text, or an old revision brought back. */
 export type RefContext = { restoring?: number };
 
-function refused(ref: FileRef, problem: 'missing' | 'pdf', { restoring }: RefContext): HttpError {
-  const thing = ref.kind === 'photo' ? `the photo ${quoted(ref.label)}(${ref.url})` : `the link ${quoted(ref.label)}to ${ref.url}`;
+function refused(ref: FileRef, problem: 'missing' | 'pdf' | 'not-trace', { restoring }: RefContext): HttpError {
+  const thing = ref.kind === 'photo' ? `the photo ${quoted(ref.label)}(${ref.url})` : ref.kind === 'trace' ? `the trace ${quoted(ref.label)}(${ref.url})` : `the link ${quoted(ref.label)}to ${ref.url}`;
   let sentence: string;
-  if (problem === 'pdf') {
+  if (problem === 'not-trace') {
+    sentence = `${restoring ? `Revision ${restoring} attaches` : 'A block attaches'} ${quoted(ref.label)}(${ref.url}) as a measured trace, but that file is not a trace; upload the measurement as text columns and attach that.`;
+  } else if (problem === 'pdf') {
     sentence = `${restoring ? `Revision ${restoring} shows` : 'The page shows'} ${quoted(ref.label)}(${ref.url}) as a photo, but that file is a PDF; add it as a link instead.`;
   } else if (restoring) {
     sentence = `Revision ${restoring} has ${thing}, which is not a file of this venue any more; restore another revision, or edit the page and add the file again.`;
@@ -82,5 +91,6 @@ export async function assertOwnFileRefs(tx: Tx, venueId: string, doc: PmNode, co
     const mime = found.get(ref.fileId);
     if (mime === undefined) throw refused(ref, 'missing', context);
     if (ref.kind === 'photo' && !mime.startsWith('image/')) throw refused(ref, 'pdf', context);
+    if (ref.kind === 'trace' && !mime.startsWith('text/plain')) throw refused(ref, 'not-trace', context);
   }
 }

@@ -2,10 +2,13 @@ import type { PmNode } from '~/lib/doc/types';
 import { renderDocHtml } from '~/lib/doc/render-html';
 import { availableFileIds, fileIdOfUrl } from './files/available-files';
 import { fileIdsInDoc } from './files/file-usage';
+import { curveHrefFor, traceIdsInDocText } from './files/block-context';
+import { loadVenueTraces } from './files/trace-data';
 
 /**
  * The read view's body HTML, cached. A revision never changes after it is written, so its HTML
- * depends only on the revision id and on which of the files it shows can still be served; both
+ * depends only on the revision id, the venue and page slugs (the curve download links), and on
+ * which of the files it shows (photos, measured traces) can still be served; all
  * are read from the database on every request and form the key. A save or restore makes a new
  * revision id, a deleted or vanished file changes the set: either misses the cache, in this
  * process or any other, so nothing stale is ever served. Entries are only an optimisation, and
@@ -21,10 +24,11 @@ export interface StoredRevision {
   doc: string;
 }
 
-export async function revisionHtml(venueId: string, revision: StoredRevision): Promise<string> {
-  const referenced = fileIdsInDoc(revision.doc);
-  const available = referenced.size ? await availableFileIds(venueId, referenced) : new Set<string>();
-  const key = `${revision.id}|${[...available].sort().join(',')}`;
+export async function revisionHtml(venue: { id: string; slug: string }, pageSlug: string, revision: StoredRevision): Promise<string> {
+  const traceIds = traceIdsInDocText(revision.doc);
+  const referenced = new Set([...fileIdsInDoc(revision.doc), ...traceIds]);
+  const available = referenced.size ? await availableFileIds(venue.id, referenced) : new Set<string>();
+  const key = `${revision.id}|${venue.slug}/${pageSlug}|${[...available].sort().join(',')}`;
   const hit = cache.get(key);
   if (hit !== undefined) {
     // Re-inserting moves it to the young end of the Map's order.
@@ -32,7 +36,11 @@ export async function revisionHtml(venueId: string, revision: StoredRevision): P
     cache.set(key, hit);
     return hit;
   }
-  const html = renderDocHtml(JSON.parse(revision.doc) as PmNode, { isImageAvailable: (src) => available.has(fileIdOfUrl(src)) });
+  const traces = await loadVenueTraces(venue.id, [...traceIds].filter((id) => available.has(id)));
+  const html = renderDocHtml(JSON.parse(revision.doc) as PmNode, {
+    isImageAvailable: (src) => available.has(fileIdOfUrl(src)),
+    blockContext: { traces, curveHref: curveHrefFor(venue.slug, pageSlug) },
+  });
   remember(key, html);
   return html;
 }

@@ -19,6 +19,16 @@ import {
 } from './blocks/block-data';
 import { bandWidths, crossoverCurves, delayResult, eqCurves, type EqCurves } from './blocks/block-curves';
 import { bandSummary, familyLabel, fixed, hz, num, rateLabel, signedDb } from './blocks/block-format';
+import { traceCurves, traceTable, type TraceLookup } from './blocks/block-traces';
+
+/** What the read view knows beyond the document: the attached traces, and where a block's curve downloads. */
+export interface BlockContext {
+  traces?: TraceLookup;
+  /** Link to download the computed curve of the n-th processor block (1-based, document order). */
+  curveHref?: (blockNumber: number) => string;
+  /** Where a trace file downloads from (a guest's pass-scoped route); /files/<id> by default. */
+  fileUrl?: (fileId: string) => string;
+}
 
 const e = (text: string) => escapeHtml(text);
 
@@ -36,7 +46,7 @@ function figure(svg: string, caption: string): string {
   return `<figure>${svg}<figcaption>${e(caption)}</figcaption></figure>`;
 }
 
-export function eqPlotSvg(block: EqBlockAttrs, idPrefix: string, compare?: EqBlockAttrs, computed?: EqCurves): string {
+export function eqPlotSvg(block: EqBlockAttrs, idPrefix: string, compare?: EqBlockAttrs, computed?: EqCurves, traces?: TraceLookup): string {
   const curves = computed ?? eqCurves(block);
   const magnitude: PlotCurve[] = [];
   if (compare) {
@@ -47,6 +57,9 @@ export function eqPlotSvg(block: EqBlockAttrs, idPrefix: string, compare?: EqBlo
     for (const p of curves.parts) magnitude.push({ role: 'part', freqs: curves.freqs, values: p.values });
     for (const p of curves.prototypes) magnitude.push({ role: 'prototype', freqs: curves.freqs, values: p.values, label: `Band ${p.index + 1} analog prototype` });
     magnitude.push({ role: 'total', freqs: curves.freqs, values: curves.total, label: 'Total' });
+    const measured = traceCurves(block, traces);
+    magnitude.push(...measured.curves);
+    if (measured.difference) magnitude.push(measured.difference);
   }
   return responseSvg({
     title: `${compare ? 'Before and after: ' : ''}EQ response${block.label ? `, ${block.label}` : ''}`,
@@ -60,7 +73,11 @@ export function eqPlotSvg(block: EqBlockAttrs, idPrefix: string, compare?: EqBlo
   });
 }
 
-function renderEq(block: EqBlockAttrs, id: string): string {
+function downloadLink(ctx: BlockContext, blockNumber: number): string {
+  return ctx.curveHref ? `<p class="tl-block-note" data-no-print><a href="${e(ctx.curveHref(blockNumber))}" download>Download the computed curve (text columns)</a></p>` : '';
+}
+
+function renderEq(block: EqBlockAttrs, id: string, ctx: BlockContext = {}, blockNumber = 0): string {
   const rows = block.bands
     .map((band, i) => {
       const w = bandWidths(band, block.sampleRate);
@@ -76,15 +93,17 @@ function renderEq(block: EqBlockAttrs, id: string): string {
   return [
     `<section class="tl-block tl-eq" aria-labelledby="${id}-h" data-block="${EQ_BLOCK}">`,
     `<div id="${id}-h">${title('EQ', block.label)}</div>`,
-    figure(eqPlotSvg(block, id, undefined, curves), `${Q_CONVENTION}${prototypeNote}`),
-    `<div class="tl-values"><table><caption>Bands at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">#</th><th scope="col">Type</th><th scope="col" class="num">Freq (Hz)</th><th scope="col" class="num">Gain (dB)</th><th scope="col" class="num">Q / S</th><th scope="col" class="num">Width (oct)</th><th scope="col" class="num">Half-gain width at ${rateLabel(block.sampleRate)} (oct)</th><th scope="col">On</th></tr></thead><tbody>${rows || '<tr><td colspan="8">No bands.</td></tr>'}</tbody></table></div>`,
+    figure(eqPlotSvg(block, id, undefined, curves, ctx.traces), `${Q_CONVENTION}${prototypeNote}`),
+    `<div class="tl-values" tabindex="0" role="region" aria-label="Values"><table><caption>Bands at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">#</th><th scope="col">Type</th><th scope="col" class="num">Freq (Hz)</th><th scope="col" class="num">Gain (dB)</th><th scope="col" class="num">Q / S</th><th scope="col" class="num">Width (oct)</th><th scope="col" class="num">Half-gain width at ${rateLabel(block.sampleRate)} (oct)</th><th scope="col">On</th></tr></thead><tbody>${rows || '<tr><td colspan="8">No bands.</td></tr>'}</tbody></table></div>`,
     `<p>Output gain ${signedDb(block.outputGain)}, polarity ${block.polarity}, sample rate ${rateLabel(block.sampleRate)}.</p>`,
+    traceTable(block, ctx.traces, ctx.fileUrl),
+    downloadLink(ctx, blockNumber),
     note(block.note),
     '</section>',
   ].join('');
 }
 
-export function crossoverPlotSvg(block: CrossoverBlockAttrs, idPrefix: string, compare?: CrossoverBlockAttrs): string {
+export function crossoverPlotSvg(block: CrossoverBlockAttrs, idPrefix: string, compare?: CrossoverBlockAttrs, traces?: TraceLookup): string {
   const c = crossoverCurves(block);
   const magnitude: PlotCurve[] = [];
   if (compare) {
@@ -94,6 +113,9 @@ export function crossoverPlotSvg(block: CrossoverBlockAttrs, idPrefix: string, c
   } else {
     c.ways.forEach((values, i) => magnitude.push({ role: 'total', freqs: c.freqs, values, label: block.ways[i]!.name || `Way ${i + 1}` }));
     magnitude.push({ role: 'sum', freqs: c.freqs, values: c.sum, label: 'Sum of the ways' });
+    const measured = traceCurves(block, traces);
+    magnitude.push(...measured.curves);
+    if (measured.difference) magnitude.push(measured.difference);
   }
   return responseSvg({
     title: `${compare ? 'Before and after: ' : ''}Crossover${block.label ? `, ${block.label}` : ''}`,
@@ -108,7 +130,7 @@ export function crossoverPlotSvg(block: CrossoverBlockAttrs, idPrefix: string, c
   });
 }
 
-function renderCrossover(block: CrossoverBlockAttrs, id: string): string {
+function renderCrossover(block: CrossoverBlockAttrs, id: string, ctx: BlockContext = {}, blockNumber = 0): string {
   const rows = block.ways
     .map(
       (w, i) =>
@@ -118,8 +140,10 @@ function renderCrossover(block: CrossoverBlockAttrs, id: string): string {
   return [
     `<section class="tl-block tl-crossover" aria-labelledby="${id}-h" data-block="${CROSSOVER_BLOCK}">`,
     `<div id="${id}-h">${title('Crossover', block.label)}</div>`,
-    figure(crossoverPlotSvg(block, id), 'Ways and their electrical sum, as if the drivers were at one point; the acoustic sum also depends on where they are.'),
-    `<div class="tl-values"><table><caption>Ways at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">Way</th><th scope="col">High-pass</th><th scope="col">Low-pass</th><th scope="col" class="num">Gain (dB)</th><th scope="col">Polarity</th><th scope="col" class="num">Delay (ms)</th></tr></thead><tbody>${rows}</tbody></table></div>`,
+    figure(crossoverPlotSvg(block, id, undefined, ctx.traces), 'Ways and their electrical sum, as if the drivers were at one point; the acoustic sum also depends on where they are.'),
+    `<div class="tl-values" tabindex="0" role="region" aria-label="Values"><table><caption>Ways at ${rateLabel(block.sampleRate)}</caption><thead><tr><th scope="col">Way</th><th scope="col">High-pass</th><th scope="col">Low-pass</th><th scope="col" class="num">Gain (dB)</th><th scope="col">Polarity</th><th scope="col" class="num">Delay (ms)</th></tr></thead><tbody>${rows}</tbody></table></div>`,
+    traceTable(block, ctx.traces, ctx.fileUrl),
+    downloadLink(ctx, blockNumber),
     note(block.note),
     '</section>',
   ].join('');
@@ -138,7 +162,7 @@ function renderDelay(block: DelayBlockAttrs, id: string): string {
   return [
     `<section class="tl-block tl-delay" aria-labelledby="${id}-h" data-block="${DELAY_BLOCK}">`,
     `<div id="${id}-h">${title('Delays', block.label)}</div>`,
-    `<div class="tl-values"><table><caption>At ${num(block.temperature, 1)} ${unit}, ${rateLabel(block.sampleRate)}: delay = flight time + precedence offset − latency</caption><thead><tr><th scope="col">Output</th><th scope="col">Distance or time</th><th scope="col" class="num">Latency (ms)</th><th scope="col" class="num">Offset (ms)</th><th scope="col" class="num">Set (ms)</th><th scope="col" class="num">Samples</th><th scope="col" class="num">Drift at −10 / +10 °C (ms)</th></tr></thead><tbody>${rows}</tbody></table></div>`,
+    `<div class="tl-values" tabindex="0" role="region" aria-label="Values"><table><caption>At ${num(block.temperature, 1)} ${unit}, ${rateLabel(block.sampleRate)}: delay = flight time + precedence offset − latency</caption><thead><tr><th scope="col">Output</th><th scope="col">Distance or time</th><th scope="col" class="num">Latency (ms)</th><th scope="col" class="num">Offset (ms)</th><th scope="col" class="num">Set (ms)</th><th scope="col" class="num">Samples</th><th scope="col" class="num">Drift at −10 / +10 °C (ms)</th></tr></thead><tbody>${rows}</tbody></table></div>`,
     note(block.note),
     '</section>',
   ].join('');
@@ -157,13 +181,13 @@ function safely(kind: string, render: () => string): string {
 }
 
 /** Renderers for the processor blocks, numbering plot ids from `idPrefix` so several blocks (or renders) on one page never share an id. */
-export function processorBlockRenderers(idPrefix = 'blk'): Record<string, BlockRenderer> {
+export function processorBlockRenderers(idPrefix = 'blk', ctx: BlockContext = {}): Record<string, BlockRenderer> {
   let count = 0;
   const next = () => `${idPrefix}-${++count}`;
   const attrs = <T>(node: PmNode) => (node.attrs ?? {}) as T;
   return {
-    [EQ_BLOCK]: (node) => safely('EQ', () => renderEq(attrs<EqBlockAttrs>(node), next())),
-    [CROSSOVER_BLOCK]: (node) => safely('crossover', () => renderCrossover(attrs<CrossoverBlockAttrs>(node), next())),
+    [EQ_BLOCK]: (node) => safely('EQ', () => renderEq(attrs<EqBlockAttrs>(node), next(), ctx, count)),
+    [CROSSOVER_BLOCK]: (node) => safely('crossover', () => renderCrossover(attrs<CrossoverBlockAttrs>(node), next(), ctx, count)),
     [DELAY_BLOCK]: (node) => safely('delay', () => renderDelay(attrs<DelayBlockAttrs>(node), next())),
   };
 }

@@ -1,7 +1,7 @@
 import { escapeHtml } from './escape-html';
 import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
-import { blockPlainText, processorBlockRenderers } from './render-blocks';
+import { blockPlainText, processorBlockRenderers, type BlockContext } from './render-blocks';
 
 /**
  * Renders a stored page document to HTML for the read view, on the server, with no editor code.
@@ -21,6 +21,8 @@ export interface RenderOptions {
    * as a short note instead of a broken image.
    */
   isImageAvailable?: (src: string) => boolean;
+  /** Measured traces and curve downloads for the processor blocks (see render-blocks.ts). */
+  blockContext?: BlockContext;
   /**
    * Where the reader fetches an image of this instance from. A guest has no session, so the
    * guest view points images at its own pass-scoped file route instead of /files/….
@@ -81,7 +83,7 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
 }
 
 export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
-  const options = { ...given, blocks: { ...processorBlockRenderers(given.idPrefix), ...given.blocks } };
+  const options = { ...given, blocks: { ...processorBlockRenderers(given.idPrefix, given.blockContext), ...given.blocks } };
   const out: string[] = [];
   // Iterative, so a deeply nested stored document cannot overflow the stack.
   const stack: (PmNode | { close: string })[] = [doc];

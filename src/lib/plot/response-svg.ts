@@ -7,7 +7,7 @@ import { escapeHtml } from '~/lib/doc/escape-html';
 import { AXIS_LABELS, DECADES, F_MAX, F_MIN, MINOR_LINES, PLOT_WIDTH, curvePath, dbRange, hzLabel, ticks, xOf, yScale } from './frequency-axis';
 
 /** How a curve is drawn: the total bold, each band faint under it, prototypes dashed, before/after apart. */
-export type CurveRole = 'total' | 'part' | 'prototype' | 'sum' | 'before' | 'after';
+export type CurveRole = 'total' | 'part' | 'prototype' | 'sum' | 'before' | 'after' | 'trace' | 'trace-faint' | 'difference';
 
 export interface PlotCurve {
   role: CurveRole;
@@ -15,6 +15,8 @@ export interface PlotCurve {
   values: readonly (number | null)[];
   /** Shown in the legend when given. */
   label?: string;
+  /** An extra class, e.g. to tell several measured traces apart. */
+  className?: string;
 }
 
 export interface ResponseSvgInput {
@@ -52,11 +54,11 @@ function pane(curves: PlotCurve[], top: number, bottom: number, yTicks: number[]
   if (nyquistHz !== undefined && nyquistHz < F_MAX) parts.push(`<path class="tl-nyquist" d="M${n(xOf(nyquistHz))} 0V${height}"/>`);
   parts.push(`<svg x="0" y="0" width="${PLOT_WIDTH}" height="${height}" overflow="hidden">`);
   // Faint parts first so the total is drawn on top of them.
-  const order: CurveRole[] = ['part', 'prototype', 'before', 'after', 'total', 'sum'];
+  const order: CurveRole[] = ['part', 'prototype', 'trace-faint', 'trace', 'before', 'after', 'difference', 'total', 'sum'];
   for (const role of order) {
     for (const c of curves.filter((curve) => curve.role === role)) {
       const d = curvePath(c.freqs, c.values, yOf, wrapAt);
-      if (d) parts.push(`<path class="tl-curve tl-curve-${role}" d="${d}"${c.label ? ` data-label="${escapeHtml(c.label)}"` : ''}/>`);
+      if (d) parts.push(`<path class="tl-curve tl-curve-${role}${c.className ? ` ${escapeHtml(c.className)}` : ''}" d="${d}"${c.label ? ` data-label="${escapeHtml(c.label)}"` : ''}/>`);
     }
   }
   parts.push('</svg></g>');
@@ -68,7 +70,7 @@ function legend(curves: PlotCurve[], y: number): string {
   let x = LEFT;
   return labelled
     .map((c) => {
-      const item = `<path class="tl-curve tl-curve-${c.role}" d="M${x} ${y - 4}h22"/><text class="tl-axis" x="${x + 28}" y="${y}">${escapeHtml(c.label!)}</text>`;
+      const item = `<path class="tl-curve tl-curve-${c.role}${c.className ? ` ${escapeHtml(c.className)}` : ''}" d="M${x} ${y - 4}h22"/><text class="tl-axis" x="${x + 28}" y="${y}">${escapeHtml(c.label!)}</text>`;
       x += 40 + c.label!.length * 7.5;
       return item;
     })
@@ -77,7 +79,10 @@ function legend(curves: PlotCurve[], y: number): string {
 
 /** The plot as one self-contained <svg> element (no script, no external references). */
 export function responseSvg(input: ResponseSvgInput): string {
-  const values = input.magnitude.flatMap((c) => c.values.filter((v): v is number => v !== null));
+  // Measured traces are clipped to the computed curves' range: a trace not yet lined up with its
+  // offset must not squash the curves the block is about.
+  const fitted = input.magnitude.filter((c) => c.role !== 'trace' && c.role !== 'trace-faint');
+  const values = (fitted.length ? fitted : input.magnitude).flatMap((c) => c.values.filter((v): v is number => v !== null));
   const range = input.range ?? dbRange(values);
   const magTicks = ticks(range.bottom, range.top, range.step);
   const phaseTop = MAG_HEIGHT + GAP;

@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { COOKBOOK_TYPES, LIMITS, POLARITIES } from '~/lib/acoustics';
-import { BLOCK_LIMITS, CROSSOVER_BLOCK, DELAY_BLOCK, EQ_BLOCK, isShelf, type ProcessorBlockType } from '~/lib/doc/blocks/block-data';
+import { BLOCK_LIMITS, CROSSOVER_BLOCK, DELAY_BLOCK, EQ_BLOCK, isShelf, TRACE_SMOOTHINGS, type ProcessorBlockType, type TraceCompare, type TraceRef } from '~/lib/doc/blocks/block-data';
 
 const FIELD_WORDS: Record<string, string> = {
   freq: 'frequency (Hz)',
@@ -35,9 +35,16 @@ const FIELD_WORDS: Record<string, string> = {
   timeMs: 'time (ms)',
   latencyMs: 'latency (ms)',
   offsetMs: 'precedence offset (ms)',
+  traces: 'traces',
+  fileId: 'file',
+  date: 'date',
+  position: 'measurement position',
+  offsetDb: 'level offset (dB)',
+  smoothing: 'smoothing',
+  compare: 'comparison',
 };
 
-const ITEM_WORDS: Record<string, string> = { bands: 'band', ways: 'way', rows: 'output' };
+const ITEM_WORDS: Record<string, string> = { bands: 'band', ways: 'way', rows: 'output', traces: 'trace' };
 
 const finite = (min: number, max: number, what: string) =>
   z
@@ -106,6 +113,48 @@ function bounded<T extends z.ZodType>(item: T, min: number, max: number, noun: s
     .pipe(z.array(item));
 }
 
+const FILE_ID = /^[A-Za-z0-9_-]{1,80}$/;
+
+export const TraceRefSchema = z.strictObject(
+  {
+    fileId: z.string({ error: 'must be the id of a trace file' }).regex(FILE_ID, { message: 'must be the id of a trace file of this venue' }),
+    label: text(BLOCK_LIMITS.traceTextChars),
+    date: z
+      .string({ error: 'must be a date (YYYY-MM-DD) or empty' })
+      .refine((d) => d === '' || (/^\d{4}-\d{2}-\d{2}$/.test(d) && !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d)), {
+        message: 'must be a date written YYYY-MM-DD, or empty',
+      }),
+    position: text(BLOCK_LIMITS.traceTextChars),
+    offsetDb: finite(BLOCK_LIMITS.traceOffsetDb.min, BLOCK_LIMITS.traceOffsetDb.max, 'dB'),
+    smoothing: z.union(TRACE_SMOOTHINGS.map((s) => z.literal(s)) as unknown as [z.ZodLiteral<number>, z.ZodLiteral<number>], {
+      error: 'must be 0 (none), 3, 6 or 12 (1/N octave)',
+    }),
+  },
+  { error: 'must be an object with fileId, label, date, position, offsetDb and smoothing' },
+);
+
+const TraceCompareSchema = z
+  .strictObject({ before: z.string({ error: 'must name a trace' }), after: z.string({ error: 'must name a trace' }) }, { error: 'must be null or {before, after}' })
+  .nullable();
+
+/** Traces are optional so blocks saved before they existed still validate. */
+const traceFields = {
+  traces: bounded(TraceRefSchema, 0, BLOCK_LIMITS.maxTraces, 'trace').optional(),
+  compare: TraceCompareSchema.optional(),
+};
+
+function traceChecks(block: { traces?: Pick<TraceRef, 'fileId'>[]; compare?: TraceCompare | null }, ctx: z.RefinementCtx) {
+  const ids = (block.traces ?? []).map((t) => t.fileId);
+  ids.forEach((id, i) => {
+    if (ids.indexOf(id) !== i) ctx.addIssue({ code: 'custom', path: ['traces', i, 'fileId'], message: 'is attached twice; attach each trace once' });
+  });
+  const c = block.compare;
+  if (c) {
+    if (!ids.includes(c.before) || !ids.includes(c.after)) ctx.addIssue({ code: 'custom', path: ['compare'], message: 'must name two traces attached to this block' });
+    else if (c.before === c.after) ctx.addIssue({ code: 'custom', path: ['compare'], message: 'must name two different traces' });
+  }
+}
+
 /** Refuses a frequency at or above 0.49·fs for every item that has one. */
 function nyquistCheck(fs: number, freq: number, path: (string | number)[], ctx: z.RefinementCtx) {
   const top = BLOCK_LIMITS.maxFractionOfFs * fs;
@@ -126,8 +175,10 @@ export const EqBlockSchema = z
     outputGain: finite(BLOCK_LIMITS.outputGainDb.min, BLOCK_LIMITS.outputGainDb.max, 'dB'),
     polarity,
     note: text(BLOCK_LIMITS.noteChars),
+    ...traceFields,
   })
   .superRefine((block, ctx) => {
+    traceChecks(block, ctx);
     block.bands.forEach((band, i) => {
       nyquistCheck(block.sampleRate, band.freq, ['bands', i, 'freq'], ctx);
       if (isShelf(band.type) && band.q > LIMITS.shelfSlope.max) {
@@ -142,8 +193,10 @@ export const CrossoverBlockSchema = z
     sampleRate,
     ways: bounded(XoverWaySchema, BLOCK_LIMITS.minWays, BLOCK_LIMITS.maxWays, 'way'),
     note: text(BLOCK_LIMITS.noteChars),
+    ...traceFields,
   })
   .superRefine((block, ctx) => {
+    traceChecks(block, ctx);
     block.ways.forEach((way, i) => {
       if (way.highPass) nyquistCheck(block.sampleRate, way.highPass.freq, ['ways', i, 'highPass', 'freq'], ctx);
       if (way.lowPass) nyquistCheck(block.sampleRate, way.lowPass.freq, ['ways', i, 'lowPass', 'freq'], ctx);

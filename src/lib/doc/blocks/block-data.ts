@@ -24,7 +24,35 @@ export const BLOCK_LIMITS = {
   nameChars: 60,
   noteChars: 2000,
   outputGainDb: { min: -40, max: 20 },
+  /** Measured traces one EQ or crossover block may carry. */
+  maxTraces: 8,
+  traceTextChars: 60,
+  traceOffsetDb: { min: -200, max: 200 },
 } as const;
+
+/** 1/N-octave smoothing of a drawn trace; 0 draws it as measured. */
+export const TRACE_SMOOTHINGS = [0, 3, 6, 12] as const;
+export type TraceSmoothing = (typeof TRACE_SMOOTHINGS)[number];
+
+/**
+ * A measured trace attached to a block: a venue file of kind "trace" (see src/lib/traces), with
+ * what the engineer wrote about it. The measurement itself stays in the file, not in the page.
+ */
+export type TraceRef = {
+  fileId: string;
+  /** "before retune", "after", "mix position"… */
+  label: string;
+  /** ISO date (YYYY-MM-DD) of the measurement, or empty. */
+  date: string;
+  /** Where the microphone was. */
+  position: string;
+  /** dB added to the trace to line it up with the computed curve. */
+  offsetDb: number;
+  smoothing: TraceSmoothing;
+};
+
+/** Two attached traces drawn with their difference (after − before). */
+export type TraceCompare = { before: string; after: string };
 
 /** Band types in the cookbook's words; "peaking" is the bell. */
 export type BandType = CookbookType;
@@ -46,6 +74,9 @@ export type EqBlockAttrs = {
   outputGain: number;
   polarity: Polarity;
   note: string;
+  /** Absent on blocks saved before traces existed. */
+  traces?: TraceRef[];
+  compare?: TraceCompare | null;
 };
 
 export type XoverEdge = {
@@ -68,6 +99,8 @@ export type CrossoverBlockAttrs = {
   sampleRate: number;
   ways: XoverWay[];
   note: string;
+  traces?: TraceRef[];
+  compare?: TraceCompare | null;
 };
 
 export type DelayRow = {
@@ -111,7 +144,7 @@ export function newBand(freq = 1000): EqBand {
 }
 
 export function newEqBlock(): EqBlockAttrs {
-  return { label: 'Mains EQ', sampleRate: 48_000, bands: [newBand(250), newBand(2500)], outputGain: 0, polarity: 'normal', note: '' };
+  return { label: 'Mains EQ', sampleRate: 48_000, bands: [newBand(250), newBand(2500)], outputGain: 0, polarity: 'normal', note: '', traces: [], compare: null };
 }
 
 export function newCrossoverBlock(): CrossoverBlockAttrs {
@@ -124,7 +157,18 @@ export function newCrossoverBlock(): CrossoverBlockAttrs {
       { name: 'Main', highPass: { ...edge }, lowPass: null, gain: 0, polarity: 'normal', delayMs: 0 },
     ],
     note: '',
+    traces: [],
+    compare: null,
   };
+}
+
+export function newTraceRef(fileId: string, label = ''): TraceRef {
+  return { fileId, label, date: '', position: '', offsetDb: 0, smoothing: 6 };
+}
+
+/** The traces of a block, whichever block and whenever it was saved. */
+export function blockTraces(attrs: { traces?: TraceRef[] } | null | undefined): TraceRef[] {
+  return Array.isArray(attrs?.traces) ? attrs.traces : [];
 }
 
 export function newDelayRow(name = 'Fill'): DelayRow {
