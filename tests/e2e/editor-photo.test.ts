@@ -182,7 +182,7 @@ describe('a photo into a page from inside the editor, on a phone', () => {
     await page.getByTestId('photo-send').click();
     const refusal = page.getByTestId('photo-error');
     await refusal.waitFor();
-    await expect(refusal.innerText()).resolves.toMatch(/^[A-Z].*Export it as JPEG or PDF and upload it again\.$/);
+    await expect(refusal.innerText()).resolves.toMatch(/^[A-Z].*Export it as JPEG or PDF.* and upload it again\.$/);
     await expect(page.getByTestId('photo-upload').getAttribute('data-status')).resolves.toBe('error');
 
     await page.getByTestId('photo-file-input').setInputFiles({ name: 'rack-c.jpg', mimeType: 'image/jpeg', buffer: jpeg });

@@ -25,7 +25,7 @@ export async function readTraceUpload(path: string, notAccepted: string): Promis
   } catch (err) {
     if (!(err instanceof TraceParseError)) throw err;
     // Text with no numbers at all is not a measurement someone meant to send: say what we take.
-    if (err.noData) throw new HttpError(415, `${notAccepted}: it is text, but holds no columns of frequency and magnitude. Throwline takes photos, PDFs and measurement traces.`, 'file');
+    if (err.noData) throw new HttpError(415, `${notAccepted}: it is text, but holds no columns of frequency and magnitude. Export it as JPEG or PDF, or a measurement as text columns, and upload it again.`, 'file');
     throw new HttpError(422, `This measurement could not be read. ${err.message}`, 'file');
   }
 }
