@@ -15,7 +15,8 @@ export class HttpError extends Error {
   }
 }
 
-export function json(data: unknown, status = 200, headers: HeadersInit = {}): Response {
+/** A JSON answer; `json<SomeAnswer<Date>>(…)` checks it against the shape the islands read (~/lib/api-types). */
+export function json<T = unknown>(data: T, status = 200, headers: HeadersInit = {}): Response {
   return new Response(JSON.stringify(data), {
     status,
     headers: { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'no-store', ...headers },

@@ -1,5 +1,6 @@
 import { and, eq, like, or } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
+import type { PageJson } from '~/lib/api-types';
 import type { PmNode } from '~/lib/doc/types';
 import type { PageCreate } from '~/lib/schemas/page';
 import { slugify } from '~/lib/slug';
@@ -10,7 +11,7 @@ import { loadVenue, requirePermission, requireUser } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
-import { revisionJson } from './revision-json';
+import { FORMER_MEMBER, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
 
 const PAGE_NOT_FOUND = 'There is no such page in this venue.';
@@ -42,7 +43,7 @@ export async function loadPageWithCurrent(venueId: string, pageSlug: string | un
     page: row.page,
     section: { slug: row.sectionSlug, title: row.sectionTitle },
     revision: row.revision
-      ? { ...row.revision, doc: JSON.parse(row.revision.doc) as PmNode, authorName: row.authorName ?? 'a former member' }
+      ? { ...row.revision, doc: JSON.parse(row.revision.doc) as PmNode, authorName: row.authorName ?? FORMER_MEMBER }
       : null,
   };
 }
@@ -50,7 +51,7 @@ export async function loadPageWithCurrent(venueId: string, pageSlug: string | un
 export type LoadedPage = Awaited<ReturnType<typeof loadPageWithCurrent>>;
 
 /** The page as the JSON routes describe it (GET /api/venues/:venue/pages/:page). */
-export function pageJson(page: typeof pages.$inferSelect, section: { slug: string; title: string }) {
+export function pageJson(page: typeof pages.$inferSelect, section: { slug: string; title: string }): PageJson<Date> {
   return {
     id: page.id,
     slug: page.slug,

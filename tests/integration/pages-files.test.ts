@@ -4,17 +4,13 @@ import { startServer, type TestServer } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
 import { PDF_BYTES, plainJpeg } from './files-fixtures';
 import { createTestPage, doc, getPage, para, snapshot, type Doc } from './pages-fixtures';
+import type { FileView } from '~/lib/schemas/file';
 
 /**
  * A page may show or link only to files of its own venue that exist: checked on create, save
  * and restore, inside the write, with one answer for "another venue's" and "no such file".
  */
 
-interface FileView {
-  id: string;
-  url: string;
-  displayUrl: string | null;
-}
 
 let server: TestServer;
 const as = {} as Record<'engineer' | 'viewer' | 'otherManager', Client>;

@@ -2,7 +2,8 @@ import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView, PageRef } from '~/lib/schemas/file';
 import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
-import { uploadFile, UploadError } from './upload-file';
+import { ApiError } from '~/components/api/client';
+import { uploadFile } from '~/components/api/upload-file';
 
 export interface UploaderProps {
   venueSlug: string;
@@ -74,7 +75,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
         update(item.key, { status: 'done', result: file });
         onUploaded?.(file);
       } catch (err) {
-        update(item.key, { status: 'error', error: err instanceof UploadError ? err.message : 'The upload failed; try again.' });
+        update(item.key, { status: 'error', error: err instanceof ApiError ? err.error : 'The upload failed; try again.' });
       }
     }
     setBusy(false);

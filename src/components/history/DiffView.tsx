@@ -1,11 +1,12 @@
 import { useMemo, useState } from 'react';
 import useSWR from 'swr';
 import { diffStats, foldUnchanged, wordDiff } from '~/lib/doc/word-diff';
-import { fetchJson } from './fetch-json';
-import type { RevisionFull } from './types';
+import { fetcher, type ApiError } from '~/components/api/client';
+import { revisionKey, type RevisionAnswer } from '~/components/api/revisions';
 
 interface Props {
-  base: string;
+  venue: string;
+  page: string;
   older: number;
   newer: number;
 }
@@ -14,15 +15,15 @@ interface Props {
  * The word-level difference between two revisions' text. Parts are rendered as React text, so
  * whatever a page contains is shown, never interpreted.
  */
-export function DiffView({ base, older, newer }: Props) {
-  const a = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${older}`, fetchJson);
-  const b = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${newer}`, fetchJson);
+export function DiffView({ venue, page, older, newer }: Props) {
+  const a = useSWR<RevisionAnswer, ApiError>(revisionKey(venue, page, older), fetcher);
+  const b = useSWR<RevisionAnswer, ApiError>(revisionKey(venue, page, newer), fetcher);
   const [whole, setWhole] = useState(false);
   const parts = useMemo(
     () => (a.data && b.data ? wordDiff(a.data.revision.plainText, b.data.revision.plainText) : null),
     [a.data, b.data],
   );
-  if (a.error || b.error) return <p className="text-danger">{(a.error ?? b.error).message}</p>;
+  if (a.error || b.error) return <p className="text-danger">{(a.error ?? b.error)?.error}</p>;
   if (!parts) return <p className="text-muted">Comparing…</p>;
   const stats = diffStats(parts);
   const changed = stats.added + stats.removed > 0;

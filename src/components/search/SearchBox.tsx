@@ -1,14 +1,10 @@
 import { useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
 import useSWR from 'swr';
-import { SearchResults, type Hit } from './SearchResults';
+import { fetcher, type ApiError } from '~/components/api/client';
+import { searchKey, type SearchAnswer } from '~/components/api/search';
+import { SEARCH_MAX_LENGTH } from '~/lib/text-limits';
+import { SearchResults } from './SearchResults';
 import { useDebounced } from './use-debounced';
-
-async function fetchHits(url: string): Promise<Hit[]> {
-  const res = await fetch(url, { headers: { accept: 'application/json' } });
-  const body = await res.json().catch(() => ({}));
-  if (!res.ok) throw new Error(body.error ?? 'Search is not available right now.');
-  return body.hits as Hit[];
-}
 
 /**
  * The header's search: results as you type (debounced, fetched with SWR), a listbox the arrow
@@ -23,8 +19,8 @@ export default function SearchBox() {
   const wrapper = useRef<HTMLDivElement>(null);
   const input = useRef<HTMLInputElement>(null);
   const settled = useDebounced(query.trim(), 200);
-  const { data, error, isLoading } = useSWR(settled ? `/api/search?q=${encodeURIComponent(settled)}` : null, fetchHits, { keepPreviousData: true });
-  const hits = settled ? (data ?? []) : [];
+  const { data, error, isLoading } = useSWR<SearchAnswer, ApiError>(searchKey(settled), fetcher, { keepPreviousData: true });
+  const hits = settled ? (data?.hits ?? []) : [];
 
   useEffect(() => setActive(-1), [settled]);
   useEffect(() => {
@@ -96,7 +92,7 @@ export default function SearchBox() {
           aria-activedescendant={active >= 0 ? `${listId}-${active}` : undefined}
           placeholder="Search pages"
           value={query}
-          maxLength={200}
+          maxLength={SEARCH_MAX_LENGTH}
           onChange={(e) => {
             setQuery(e.target.value);
             setOpen(true);
@@ -112,7 +108,7 @@ export default function SearchBox() {
             hits={hits}
             active={active}
             pending={isLoading || settled !== query.trim()}
-            error={error?.message}
+            error={error?.error}
             onHover={setActive}
           />
         )}

@@ -1,20 +1,9 @@
-export interface Part {
-  text: string;
-  match: boolean;
-}
-
-export interface Hit {
-  url: string;
-  venue: { slug: string; name: string };
-  page: { slug: string; title: string };
-  section: { slug: string; title: string };
-  titleParts: Part[];
-  snippetParts: Part[];
-}
+import type { SearchHit } from '~/components/api/search';
+import type { SnippetPart } from '~/lib/doc/marked-snippet';
 
 interface Props {
   listId: string;
-  hits: Hit[];
+  hits: SearchHit[];
   active: number;
   pending: boolean;
   error?: string;
@@ -22,7 +11,7 @@ interface Props {
 }
 
 /** Matched words come back as parts and are rendered as text inside <mark>, never as HTML. */
-function Marked({ parts }: { parts: Part[] }) {
+function Marked({ parts }: { parts: SnippetPart[] }) {
   return (
     <>
       {parts.map((p, i) =>

@@ -1,5 +1,8 @@
 import { z } from 'zod';
 import { SLUG_PATTERN } from '~/lib/slug';
+import { PAGE_TITLE_MAX, SEARCH_MAX_LENGTH, SECTION_TITLE_MAX, SLUG_MAX, SUMMARY_MAX } from '~/lib/text-limits';
+
+export { SEARCH_MAX_LENGTH };
 
 /**
  * Request bodies for pages, revisions, sections and search, shared by the editor island and the
@@ -23,18 +26,18 @@ const title = z
   .string({ error: 'Give the page a title (text).' })
   .trim()
   .min(1, 'Give the page a title.')
-  .max(140, 'Keep the title under 140 characters.');
+  .max(PAGE_TITLE_MAX, `Keep the title under ${PAGE_TITLE_MAX} characters.`);
 
 const summary = z
   .string({ error: 'The summary must be text.' })
   .trim()
-  .max(200, 'Keep the summary to one line (under 200 characters).')
+  .max(SUMMARY_MAX, `Keep the summary to one line (under ${SUMMARY_MAX} characters).`)
   .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.');
 
 const sectionSlug = z
   .string({ error: 'Choose a section.' })
   .min(1, 'Choose a section.')
-  .max(60, 'Choose one of the sections of this venue.');
+  .max(SLUG_MAX, 'Choose one of the sections of this venue.');
 
 const revisionNumber = z
   .number({ error: 'Say which revision you started from: baseRevision must be a number.' })
@@ -51,7 +54,7 @@ export const PageCreateSchema = strictBody({
   slug: z
     .string({ error: 'The slug must be text.' })
     .regex(SLUG_PATTERN, 'The slug may use only lower-case letters, digits and single hyphens, e.g. "stage-patch".')
-    .max(60, 'Keep the slug under 60 characters.')
+    .max(SLUG_MAX, `Keep the slug under ${SLUG_MAX} characters.`)
     .optional(),
 });
 export type PageCreate = z.infer<typeof PageCreateSchema>;
@@ -71,8 +74,6 @@ export const RestoreSchema = strictBody({
 });
 export type RestoreRequest = z.infer<typeof RestoreSchema>;
 
-export const SEARCH_MAX_LENGTH = 200;
-
 /** Query parameters, so other keys are ignored rather than refused. */
 export const SearchQuerySchema = z.object({
   q: z
@@ -90,14 +91,14 @@ const sectionTitle = z
   .string({ error: 'Give the section a title (text).' })
   .trim()
   .min(1, 'Give the section a title.')
-  .max(60, 'Keep the section title under 60 characters.');
+  .max(SECTION_TITLE_MAX, `Keep the section title under ${SECTION_TITLE_MAX} characters.`);
 
 export const SectionCreateSchema = strictBody({
   title: sectionTitle,
   slug: z
     .string({ error: 'The slug must be text.' })
     .regex(SLUG_PATTERN, 'The slug may use only lower-case letters, digits and single hyphens, e.g. "backline".')
-    .max(60, 'Keep the slug under 60 characters.')
+    .max(SLUG_MAX, `Keep the slug under ${SLUG_MAX} characters.`)
     .optional(),
 });
 export type SectionCreate = z.infer<typeof SectionCreateSchema>;

@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { PageAnswer, PageSaved } from '~/lib/api-types';
 import { PageSaveSchema } from '~/lib/schemas/page';
 import { guardVenue } from '~/server/guard';
 import { handle, json, parseWith, readJsonBody } from '~/server/http';
@@ -10,7 +11,7 @@ export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
     const { venue } = await guardVenue(locals.user, params.venue, 'venue.read');
     const { page, section, revision } = await loadPageWithCurrent(venue.id, params.page);
-    return json({
+    return json<PageAnswer<Date>>({
       page: pageJson(page, section),
       revision: revision ? revisionJson(revision, authorJson(revision.authorId, revision.authorName), revision.doc) : null,
     });
@@ -22,5 +23,5 @@ export const PUT: APIRoute = ({ locals, params, request }) =>
     const { venue, user } = await guardPage(locals.user, params.venue, params.page, 'page.edit');
     const input = parseWith(PageSaveSchema, await readJsonBody(request));
     const saved = await saveRevision(venue.id, params.page, input, user);
-    return json(saved);
+    return json<PageSaved<Date>>(saved);
   });

@@ -1,0 +1,43 @@
+import type { PageSaved, RevisionWithDoc, SaveConflictBody } from '~/lib/api-types';
+import type { PmNode } from '~/lib/doc/types';
+import { ApiError, request, UNREACHABLE, venueApi } from './client';
+
+/** The revision the editor started from, or the one that won when a save was refused with 409. */
+export type CurrentRevision = Pick<RevisionWithDoc, 'number' | 'doc' | 'summary' | 'author' | 'createdAt'>;
+
+export type SaveResult =
+  | { kind: 'ok'; url: string; revision: number }
+  | { kind: 'conflict'; current: CurrentRevision }
+  | { kind: 'error'; message: string; field?: string };
+
+const OFFLINE = 'Could not reach Throwline. Your text is kept on this device; save again when the connection is back.';
+const SIGNED_OUT = 'Your session has ended. Sign in again in another tab, then press Save here: your text is kept on this device.';
+
+/** A save's outcome as the editor shows it: the page, the revision that won, or a sentence. */
+async function save(send: () => Promise<PageSaved>, venue: string): Promise<SaveResult> {
+  try {
+    const answer = await send();
+    return { kind: 'ok', url: `/venues/${venue}/${answer.page.slug}`, revision: answer.revision.number };
+  } catch (err) {
+    if (!(err instanceof ApiError)) throw err;
+    const current = (err.body as Partial<SaveConflictBody>).current;
+    if (err.status === 409 && current) return { kind: 'conflict', current };
+    if (err.status === UNREACHABLE) return { kind: 'error', message: OFFLINE };
+    if (err.status === 401) return { kind: 'error', message: SIGNED_OUT };
+    return { kind: 'error', message: err.error, field: err.field };
+  }
+}
+
+const fallback = (status: number) => `The server answered ${status}. Your text is kept on this device.`;
+
+export function pageApi(venue: string, page: string): string {
+  return `${venueApi(venue)}/pages/${encodeURIComponent(page)}`;
+}
+
+export function savePage(venue: string, page: string, body: { doc: PmNode; baseRevision: number; summary: string; title?: string; section?: string }) {
+  return save(() => request<PageSaved>(pageApi(venue, page), { method: 'PUT', body, fallback, unreachable: OFFLINE }), venue);
+}
+
+export function createPage(venue: string, body: { doc: PmNode; title: string; section: string; summary: string }) {
+  return save(() => request<PageSaved>(`${venueApi(venue)}/pages`, { method: 'POST', body, fallback, unreachable: OFFLINE }), venue);
+}

@@ -1,0 +1,12 @@
+import type { VenueCreated } from '~/lib/api-types';
+import { request } from './client';
+
+/** POST /api/venues (instance admins): the new venue, or an ApiError naming the field at fault. */
+export function createVenue(body: { name: string; town?: string }): Promise<VenueCreated> {
+  return request<VenueCreated>('/api/venues', {
+    method: 'POST',
+    body,
+    fallback: 'The venue could not be created.',
+    unreachable: 'No connection to the server; try again when online.',
+  });
+}
