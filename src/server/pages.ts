@@ -5,7 +5,7 @@ import type { PmNode } from '~/lib/doc/types';
 import type { PageCreate } from '~/lib/schemas/page';
 import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
-import { getDb, writeTx, type Tx } from './db';
+import { getDb, writeTx, type Reader, type Tx } from './db';
 import type { Action } from '~/lib/permissions';
 import { loadVenue, requirePermission, requireUser } from './guard';
 import { HttpError } from './http';
@@ -64,11 +64,18 @@ export function pageJson(page: typeof pages.$inferSelect, section: { slug: strin
   };
 }
 
-/** Just the page row, for routes that need its id (history, one revision). */
-export async function findPage(venueId: string, pageSlug: string | undefined) {
-  if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
-  const db = await getDb();
+export type PageRow = typeof pages.$inferSelect;
+
+/** The page of this venue with that slug, read through `db` (the database or a write's `tx`). */
+export async function pageBySlug(db: Reader, venueId: string, pageSlug: string | undefined): Promise<PageRow | undefined> {
+  if (!pageSlug || pageSlug.length > 100) return undefined;
   const [page] = await db.select().from(pages).where(and(eq(pages.venueId, venueId), eq(pages.slug, pageSlug))).limit(1);
+  return page;
+}
+
+/** Just the page row, for routes that need its id (history, one revision, a save); 404 when absent. */
+export async function findPage(venueId: string, pageSlug: string | undefined, db?: Reader): Promise<PageRow> {
+  const page = await pageBySlug(db ?? (await getDb()), venueId, pageSlug);
   if (!page) throw new HttpError(404, PAGE_NOT_FOUND);
   return page;
 }

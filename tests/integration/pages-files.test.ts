@@ -147,6 +147,26 @@ describe('restoring a revision whose photo is gone', () => {
   });
 });
 
+describe('which pages use a file', () => {
+  it('a page that only mentions the file’s address in its text is not listed; one that shows it is, and only it blocks a delete', async () => {
+    const file = await upload(as.engineer, venue);
+    const mention = await createTestPage(as.engineer, venue, 'Where the photos were', doc(para(`The old rack photo was at ${file.displayUrl} and /files/${file.id}.`)));
+    const shows = await createTestPage(as.engineer, venue, 'Rack photo', doc(photo(file.displayUrl!)));
+    const listed = async () => {
+      const { files } = (await (await as.viewer.fetch(`/api/venues/${venue}/files`)).json()) as { files: FileView[] };
+      return files.find((f) => f.id === file.id)!.usedBy.map((p) => p.slug);
+    };
+    expect(await listed()).toEqual([shows.page.slug]);
+    expect(mention.page.slug).not.toBe(shows.page.slug);
+
+    // Once the page that shows it stops doing so, nothing uses the file and a plain delete goes through.
+    expect((await put(shows.page.slug, { doc: doc(para('No photo yet.')), baseRevision: shows.revision.number })).status).toBe(200);
+    expect(await listed()).toEqual([]);
+    const deleted = await as.engineer.fetch(`/api/venues/${venue}/files/${file.id}`, { method: 'DELETE' });
+    expect(deleted.status).toBe(200);
+  });
+});
+
 describe('a save and a delete of the same file at the same moment', () => {
   it('never both go through: either the page shows a file that still exists, or the save is refused', async () => {
     for (let round = 0; round < 4; round++) {

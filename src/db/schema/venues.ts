@@ -1,4 +1,5 @@
 import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { ROLES } from '~/lib/permissions';
 import { createdAt, id } from './columns';
 import { users } from './users';
 
@@ -10,8 +11,6 @@ export const venues = sqliteTable('venues', {
   createdAt: createdAt(),
 });
 
-export const ROLES = ['manager', 'engineer', 'viewer'] as const;
-
 export const memberships = sqliteTable(
   'memberships',
   {
@@ -21,6 +20,7 @@ export const memberships = sqliteTable(
     userId: text('user_id')
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
+    // Exactly the roles the permission policy knows.
     role: text('role', { enum: ROLES }).notNull(),
     createdAt: createdAt(),
   },

@@ -1,4 +1,5 @@
 import { open } from 'node:fs/promises';
+import { isFileId } from '~/lib/file-url';
 import { Readable } from 'node:stream';
 import { eq } from 'drizzle-orm';
 import { files, venues } from '~/db/schema';
@@ -13,7 +14,6 @@ import { FILE_NOT_FOUND, type FileRow } from './file-records';
 import { ensureStorageReady } from './storage-sweep';
 import { storedPath } from './storage-paths';
 
-const FILE_ID = /^[A-Za-z0-9_-]{1,80}$/;
 
 /**
  * The file row, for people who may read its venue. A file of a venue the person is not a member
@@ -21,7 +21,7 @@ const FILE_ID = /^[A-Za-z0-9_-]{1,80}$/;
  */
 export async function loadReadableFile(user: SessionUser | null | undefined, fileId: string | undefined): Promise<FileRow> {
   const signedIn = requireUser(user);
-  if (!fileId || !FILE_ID.test(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
+  if (!isFileId(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
   const db = await getDb();
   const [found] = await db.select({ file: files, venueSlug: venues.slug }).from(files).innerJoin(venues, eq(venues.id, files.venueId)).where(eq(files.id, fileId)).limit(1);
   if (!found) throw new HttpError(404, FILE_NOT_FOUND);
