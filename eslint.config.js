@@ -44,6 +44,9 @@ export default tseslint.config(
       // autoFocus appears only where a person's own action opened a dialog or a form; moving
       // focus into it is what the WAI-ARIA dialog pattern asks for.
       'jsx-a11y/no-autofocus': 'off',
+      // A scrolling region must take focus so a keyboard can scroll it (WCAG 2.1.1; axe's
+      // scrollable-region-focusable); it is named by aria-label and has role="region".
+      'jsx-a11y/no-noninteractive-tabindex': ['error', { roles: ['tabpanel', 'region'] }],
     },
   },
   { files: ['src/env.d.ts'], rules: { '@typescript-eslint/triple-slash-reference': 'off', '@typescript-eslint/consistent-type-imports': 'off' } },

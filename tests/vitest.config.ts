@@ -18,6 +18,9 @@ export default defineConfig({
           sequence: { groupOrder: 0 },
           include: ['src/**/*.test.ts'],
           environment: 'node',
+          // Password hashing and property tests are CPU-bound; on a loaded 2-core runner 5 s is
+          // not enough, and a time-out there says nothing about correctness.
+          testTimeout: 30_000,
         },
       },
       {

@@ -10,6 +10,7 @@ import { startServer } from '../helpers/server';
 import { signIn } from '../helpers/session';
 import { load } from './http-load';
 import { benchAcoustics } from './acoustics';
+import { benchLighthouse } from './lighthouse';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 4);
 const CONCURRENCY = Number(process.env.BENCH_CONCURRENCY ?? 20);
@@ -50,6 +51,7 @@ async function benchHttp() {
 
 await benchHttp();
 benchAcoustics();
+await benchLighthouse();
 
 const upload = spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/cli/bench-upload.ts'], { stdio: 'inherit' });
 if (upload.error) console.log('(upload benchmark not run)');

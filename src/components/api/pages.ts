@@ -1,4 +1,4 @@
-import type { PageSaved, RevisionWithDoc, SaveConflictBody } from '~/lib/api-types';
+import type { PageAnswer, PageSaved, RevisionWithDoc, SaveConflictBody } from '~/lib/api-types';
 import type { PmNode } from '~/lib/doc/types';
 import { ApiError, request, UNREACHABLE, venueApi } from './client';
 
@@ -40,4 +40,19 @@ export function savePage(venue: string, page: string, body: { doc: PmNode; baseR
 
 export function createPage(venue: string, body: { doc: PmNode; title: string; section: string; summary: string }) {
   return save(() => request<PageSaved>(`${venueApi(venue)}/pages`, { method: 'POST', body, fallback, unreachable: OFFLINE }), venue);
+}
+
+/** GET /api/venues/:venue/pages: the venue's pages, slug and title first. */
+export async function listPages(venue: string): Promise<{ slug: string; title: string }[]> {
+  return (await request<{ pages: { slug: string; title: string }[] }>(`${venueApi(venue)}/pages`)).pages;
+}
+
+/** GET /api/venues/:venue/pages/:page: the page with its current revision and document. */
+export function getPage(venue: string, page: string): Promise<PageAnswer> {
+  return request<PageAnswer>(pageApi(venue, page));
+}
+
+/** PUT: a new revision on top of `baseRevision`; refused with an ApiError (409 when someone saved first). */
+export function putPage(venue: string, page: string, body: { doc: PmNode; baseRevision: number; summary: string }): Promise<PageSaved> {
+  return request<PageSaved>(pageApi(venue, page), { method: 'PUT', body });
 }

@@ -10,3 +10,15 @@ export function createVenue(body: { name: string; town?: string }): Promise<Venu
     unreachable: 'No connection to the server; try again when online.',
   });
 }
+
+/** A venue this person may read, with their role there (null: an administrator who is not a member). */
+export interface VenueListed {
+  slug: string;
+  name: string;
+  role: string | null;
+}
+
+/** GET /api/venues: the venues this person may read. */
+export async function listMyVenues(): Promise<VenueListed[]> {
+  return (await request<{ venues: VenueListed[] }>('/api/venues')).venues;
+}

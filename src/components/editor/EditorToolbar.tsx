@@ -3,6 +3,7 @@ import { useEffect, useRef, useState } from 'react';
 import { LinkForm } from './LinkForm';
 import { PhotoDialog, type PhotoTarget } from './PhotoDialog';
 import { ToolButton } from './ToolButton';
+import { CROSSOVER_BLOCK, DELAY_BLOCK, EQ_BLOCK, newCrossoverBlock, newDelayBlock, newEqBlock } from '~/lib/doc/blocks/block-data';
 
 type Block = 'p' | '1' | '2' | '3' | '4';
 
@@ -74,10 +75,14 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
           • List
         </ToolButton>
         <ToolButton label="Numbered list" active={s.ordered} onClick={() => run().toggleOrderedList().run()}>
-          1. List
+          <svg width="16" height="14" viewBox="0 0 16 14" aria-hidden="true" className="mr-1">
+            <path d="M6 2h10M6 7h10M6 12h10" stroke="currentColor" strokeWidth="1.6" />
+            <path d="M1.5 1 2.5 0.5v3.5M1 12.5h2.5L1 10.2a1 1 0 1 1 2.2-.7" stroke="currentColor" strokeWidth="1" fill="none" />
+          </svg>
+          Numbered
         </ToolButton>
         <ToolButton label="Checklist" active={s.tasks} onClick={() => run().toggleTaskList().run()}>
-          ☐ Checks
+          <span aria-hidden="true">☐</span>&nbsp;Checklist
         </ToolButton>
         {divider}
         {s.inTable ? (
@@ -103,6 +108,16 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
             ▦ Table
           </ToolButton>
         )}
+        {divider}
+        <ToolButton label="Insert an EQ block" onClick={() => run().insertContent({ type: EQ_BLOCK, attrs: newEqBlock() }).run()} testId="insert-eq">
+          EQ
+        </ToolButton>
+        <ToolButton label="Insert a crossover block" onClick={() => run().insertContent({ type: CROSSOVER_BLOCK, attrs: newCrossoverBlock() }).run()} testId="insert-crossover">
+          X-over
+        </ToolButton>
+        <ToolButton label="Insert a delay block" onClick={() => run().insertContent({ type: DELAY_BLOCK, attrs: newDelayBlock() }).run()} testId="insert-delay">
+          Delay
+        </ToolButton>
         {divider}
         <ToolButton label="Undo" disabled={!s.canUndo} onClick={() => run().undo().run()}>
           ↶ Undo

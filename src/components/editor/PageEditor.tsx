@@ -1,8 +1,8 @@
 import { EditorContent, useEditor } from '@tiptap/react';
 import { useEffect, useState } from 'react';
-import { docExtensions } from '~/lib/doc/extensions';
 import { docPlainText, renderDocHtml } from '~/lib/doc/render-html';
 import type { PmNode } from '~/lib/doc/types';
+import { editorExtensions } from './blocks/editor-extensions';
 import { ConflictPanel } from './ConflictPanel';
 import { copyRich } from './copy-text';
 import { DraftNotice } from './DraftNotice';
@@ -41,7 +41,7 @@ export default function PageEditor({ venue, sections, page, current, mayUpload =
   const [copied, setCopied] = useState(false);
 
   const editor = useEditor({
-    extensions: docExtensions,
+    extensions: editorExtensions,
     content: current?.doc ?? EMPTY_DOC,
     immediatelyRender: false,
     editorProps: {

@@ -37,7 +37,7 @@ export function VenueFilePicker({ files, error, onPick }: Props) {
               {file.thumbUrl ? (
                 <img src={file.thumbUrl} alt="" loading="lazy" className="aspect-square w-full bg-sunken object-cover" />
               ) : (
-                <span className="flex aspect-square w-full items-center justify-center bg-sunken text-lg font-bold text-muted">{file.kind === 'pdf' ? 'PDF' : '—'}</span>
+                <span className="flex aspect-square w-full items-center justify-center bg-sunken text-lg font-bold text-muted">{file.kind === 'pdf' ? 'PDF' : file.kind === 'trace' ? 'Trace' : '—'}</span>
               )}
               <span className="truncate px-1.5 py-1 text-xs">{name}</span>
             </button>

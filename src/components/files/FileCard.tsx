@@ -45,7 +45,7 @@ export function FileCard({ file, venueSlug, mayEdit, mayDelete, onChanged, onDel
         {file.thumbUrl && !file.missing ? (
           <img src={file.thumbUrl} alt={file.caption || ''} loading="lazy" className="aspect-[4/3] w-full object-cover" data-testid="file-thumb" />
         ) : (
-          <span className="flex aspect-[4/3] w-full items-center justify-center text-2xl font-bold text-muted">{file.kind === 'pdf' ? 'PDF' : '—'}</span>
+          <span className="flex aspect-[4/3] w-full items-center justify-center text-2xl font-bold text-muted">{file.kind === 'pdf' ? 'PDF' : file.kind === 'trace' ? 'Trace' : '—'}</span>
         )}
       </a>
       <div className="flex flex-1 flex-col gap-2 p-3 text-sm">

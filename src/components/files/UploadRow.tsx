@@ -7,7 +7,8 @@ export interface QueuedUpload {
   key: number;
   file: File;
   caption: string;
-  status: 'ready' | 'sending' | 'processing' | 'done' | 'error';
+  /** `refused`: the browser already knows the server would refuse it; it is never sent. */
+  status: 'ready' | 'sending' | 'processing' | 'done' | 'error' | 'refused';
   /** Fraction of the bytes sent, from the browser's upload progress events. */
   progress: number;
   preview: string | null;
@@ -21,6 +22,7 @@ const STATUS_WORDS: Record<QueuedUpload['status'], string> = {
   processing: 'Sent; making the thumbnail…',
   done: 'Saved',
   error: 'Not saved',
+  refused: 'Will not be sent',
 };
 
 interface Props {
@@ -34,6 +36,7 @@ export function UploadRow({ item, busy, onCaption, onRemove }: Props) {
   const captionId = useId();
   const percent = Math.round(item.progress * 100);
   const editable = item.status === 'ready' || item.status === 'error';
+  const failed = item.status === 'error' || item.status === 'refused';
   return (
     <li className="space-y-2 rounded-lg border border-line bg-surface p-3" data-testid="upload-row" data-status={item.status}>
       <div className="flex items-center gap-3">
@@ -50,7 +53,7 @@ export function UploadRow({ item, busy, onCaption, onRemove }: Props) {
           </p>
           <p className="text-xs text-muted">{formatBytes(item.file.size)}</p>
         </div>
-        {editable && !busy && (
+        {(editable || item.status === 'refused') && !busy && (
           <button type="button" onClick={onRemove} className="min-h-11 min-w-11 rounded-md px-2 text-muted hover:bg-sunken" aria-label={`Remove ${item.file.name} from the list`}>
             ✕
           </button>
@@ -71,14 +74,19 @@ export function UploadRow({ item, busy, onCaption, onRemove }: Props) {
         data-testid="upload-caption"
       />
       <div className="flex items-center gap-3">
-        <progress
-          max={1}
-          value={item.progress}
-          className="h-2 min-w-0 flex-1 accent-[var(--tl-accent)]"
-          aria-label={`Upload progress for ${item.file.name}`}
-          data-testid="upload-progress"
-        />
-        <span className="shrink-0 text-right text-xs text-muted" aria-live="polite">
+        {failed ? (
+          // A full bar beside "Not saved" would say the opposite of the words.
+          <span className="h-2 min-w-0 flex-1 rounded-full bg-danger/20" aria-hidden="true" />
+        ) : (
+          <progress
+            max={1}
+            value={item.progress}
+            className="h-2 min-w-0 flex-1 accent-[var(--tl-accent)]"
+            aria-label={`Upload progress for ${item.file.name}`}
+            data-testid="upload-progress"
+          />
+        )}
+        <span className={`shrink-0 text-right text-xs ${failed ? 'font-semibold text-danger' : 'text-muted'}`} aria-live="polite">
           {item.status === 'sending' ? `${STATUS_WORDS.sending} ${percent}%` : STATUS_WORDS[item.status]}
         </span>
       </div>

@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView, PageRef } from '~/lib/schemas/file';
-import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
+import { UPLOAD_ACCEPT_WITH_TRACES, uploadPrecheck } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
 import { ApiError } from '~/components/api/client';
 import { uploadFile } from '~/components/api/upload-file';
@@ -34,14 +34,19 @@ export function Uploader({ venueSlug, pages, onUploaded }: UploaderProps) {
 
   function add(fileList: FileList | null) {
     if (!fileList?.length) return;
-    const added = Array.from(fileList).map<QueuedUpload>((file) => ({
+    const added = Array.from(fileList).map<QueuedUpload>((file) => {
+      const refusal = uploadPrecheck(file);
+      return {
       key: nextKey++,
       file,
       caption: '',
-      status: 'ready',
+      // Flagged on arrival, not when its turn comes: the person can remove it before sending.
+      status: refusal ? 'refused' : 'ready',
+      error: refusal ?? undefined,
       progress: 0,
-      preview: file.type.startsWith('image/') && !/heic|heif/i.test(file.type) ? URL.createObjectURL(file) : null,
-    }));
+      preview: !refusal && file.type.startsWith('image/') && !/heic|heif/i.test(file.type) ? URL.createObjectURL(file) : null,
+      };
+    });
     setQueue((list) => [...list.filter((q) => q.status !== 'done'), ...added]);
     if (inputRef.current) inputRef.current.value = '';
   }
@@ -80,7 +85,7 @@ export function Uploader({ venueSlug, pages, onUploaded }: UploaderProps) {
           ref={inputRef}
           id={inputId}
           type="file"
-          accept={UPLOAD_ACCEPT}
+          accept={UPLOAD_ACCEPT_WITH_TRACES}
           multiple
           className="peer sr-only"
           onChange={(e) => add(e.currentTarget.files)}
@@ -92,7 +97,7 @@ export function Uploader({ venueSlug, pages, onUploaded }: UploaderProps) {
         >
           Choose photos or PDFs
         </label>
-        <span className="text-sm text-muted">JPEG, PNG, WebP or PDF, up to 25 MiB each (export HEIC photos as JPEG). Location data is removed from photos.</span>
+        <span className="text-sm text-muted">JPEG, PNG, WebP, PDF, or a measurement trace as text columns; up to 25 MiB each (an iPhone's HEIC photos: share them as JPEG). Location data is removed from photos.</span>
       </div>
 
       {queue.length > 0 && (

@@ -83,7 +83,8 @@ export default function HistoryView({ venue, page, mayRestore, initial }: Histor
               </select>
             </label>
           </div>
-          <div className="mt-3">{pair && <DiffView venue={venue} page={page} older={pair.older} newer={pair.newer} />}</div>
+          {/* Room reserved for the comparison, so the revision list below does not jump when it loads. */}
+          <div className="mt-3 min-h-[min(70vh,32rem)]">{pair && <DiffView venue={venue} page={page} older={pair.older} newer={pair.newer} />}</div>
         </section>
       )}
       <section aria-labelledby="tl-revisions">

@@ -45,6 +45,8 @@ export function requireSampleRate(sampleRateHz: unknown): number {
  */
 export function requireBelowNyquist(frequencyHz: unknown, sampleRateHz: number, label = 'The filter frequency', allowNyquist = false): number {
   const nyquist = requireSampleRate(sampleRateHz) / 2;
+  // The common case returns before the refusal's sentence is built: responses call this per point.
+  if (typeof frequencyHz === 'number' && frequencyHz >= LIMITS.frequencyHz.min && (allowNyquist ? frequencyHz <= nyquist : frequencyHz < nyquist)) return frequencyHz;
   return requireInRange(frequencyHz, { min: LIMITS.frequencyHz.min, max: nyquist }, label, 'Hz', {
     maxExclusive: !allowNyquist,
     hint: `At ${formatNumber(sampleRateHz)} Hz sampling nothing ${allowNyquist ? 'above' : 'at or above'} ${formatNumber(nyquist)} Hz (half the sample rate) exists; lower the frequency or raise the sample rate.`,

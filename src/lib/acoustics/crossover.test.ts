@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { butterworthSectionQs, crossoverSections, isPolarityInverted, type CrossoverFamily } from './crossover';
+import { butterworthSectionQs, crossoverSections, usualHighPolarity, type CrossoverFamily } from './crossover';
 import { cascadeComplexResponse } from './biquad-response';
 import { cascadeResponse, type FilterSpec } from './filter-response';
 
@@ -132,22 +132,26 @@ describe('Linkwitz-Riley sum is flat (Linkwitz, JAES 24(1) 1976)', () => {
           const f = 10 * (fs / 2 / 10) ** where; // log-uniform from 10 Hz to Nyquist
           const low = cascadeComplexResponse(crossoverSections('low', 'linkwitz-riley', slope, fc0, fs), f, fs);
           const high = cascadeComplexResponse(crossoverSections('high', 'linkwitz-riley', slope, fc0, fs), f, fs);
-          expect(Math.abs(dB({ re: low.re + high.re, im: low.im + high.im }))).toBeLessThan(0.01);
+          // The high side wired as the crossover is usually wired: inverted for LR12 and LR36.
+          const sign = usualHighPolarity('linkwitz-riley', slope) === 'inverted' ? -1 : 1;
+          expect(Math.abs(dB({ re: low.re + sign * high.re, im: low.im + sign * high.im }))).toBeLessThan(0.01);
         },
       ),
       RUN,
     );
   });
 
-  it('LR12 and LR36 need the high side inverted, and get it: un-inverted they null at the crossover (decision)', () => {
-    expect(isPolarityInverted('linkwitz-riley', 12, 'high')).toBe(true);
-    expect(isPolarityInverted('linkwitz-riley', 36, 'high')).toBe(true);
-    expect(isPolarityInverted('linkwitz-riley', 24, 'high')).toBe(false);
-    expect(isPolarityInverted('linkwitz-riley', 12, 'low')).toBe(false);
-    expect(isPolarityInverted('butterworth', 12, 'high')).toBe(false);
+  it('LR12 and LR36 sides come out normal; wired normal/normal they null at the crossover, so the advice is to invert the high side', () => {
+    expect(usualHighPolarity('linkwitz-riley', 12)).toBe('inverted');
+    expect(usualHighPolarity('linkwitz-riley', 36)).toBe('inverted');
+    expect(usualHighPolarity('linkwitz-riley', 24)).toBe('normal');
+    expect(usualHighPolarity('linkwitz-riley', 48)).toBe('normal');
+    expect(usualHighPolarity('butterworth', 12)).toBe('normal');
     const low = cascadeComplexResponse(crossoverSections('low', 'linkwitz-riley', 12, 1000, 48_000), 1000, 48_000);
     const high = cascadeComplexResponse(crossoverSections('high', 'linkwitz-riley', 12, 1000, 48_000), 1000, 48_000);
-    expect(dB({ re: low.re - high.re, im: low.im - high.im })).toBeLessThan(-100);
+    // Nothing inverted silently: the in-phase sum nulls (Linkwitz 1976, odd-order LR), the difference is flat.
+    expect(dB({ re: low.re + high.re, im: low.im + high.im })).toBeLessThan(-100);
+    expect(Math.abs(dB({ re: low.re - high.re, im: low.im - high.im }))).toBeLessThan(0.01);
   });
 
   it('LR24 low side is two cookbook Butterworth Q = 0.7071 sections', () => {

@@ -32,9 +32,15 @@ function butterworthSections(side: CrossoverSide, order: number, frequencyHz: nu
   return firstOrder ? [designFirstOrder(type, frequencyHz, sampleRateHz), ...sections] : sections;
 }
 
-/** True when this crossover side is returned polarity-inverted (see `crossoverSections`). */
-export function isPolarityInverted(family: CrossoverFamily, slopeDbPerOctave: number, side: CrossoverSide): boolean {
-  return family === 'linkwitz-riley' && side === 'high' && (slopeDbPerOctave / 12) % 2 === 1;
+/**
+ * Whether the usual wiring of this crossover puts the high side in inverted polarity so that the two
+ * sides sum flat. Linkwitz-Riley of odd Butterworth order (LR12, LR36) sum to a null at the crossover
+ * with both sides normal and to an all-pass with the high side inverted (Linkwitz, JAES 24(1) 1976).
+ * Advice only: `crossoverSections` never inverts anything; polarity is a per-way setting the person
+ * sees and chooses.
+ */
+export function usualHighPolarity(family: CrossoverFamily, slopeDbPerOctave: number): 'normal' | 'inverted' {
+  return family === 'linkwitz-riley' && (slopeDbPerOctave / 12) % 2 === 1 ? 'inverted' : 'normal';
 }
 
 /**
@@ -43,10 +49,10 @@ export function isPolarityInverted(family: CrossoverFamily, slopeDbPerOctave: nu
  *   −3.01 dB at the crossover.
  * - Linkwitz-Riley, slope 12n dB/oct: two identical order-n Butterworth filters in cascade (LR12 = two
  *   first-order sections = one Q 0.5 biquad; LR24 = two Q 0.7071; LR48 = two Butterworth order 4);
- *   each side is −6.02 dB at the crossover and low + high sum to flat magnitude.
- *   Decision: for LR12 and LR36 (n odd) the high side is returned polarity-inverted, because only
- *   then does the sum come out flat (the in-phase sum has a null at the crossover) — which is how
- *   those crossovers are always wired. See `isPolarityInverted`.
+ *   each side is −6.02 dB at the crossover and low + high sum to flat magnitude — with the high side
+ *   inverted for LR12 and LR36 (see `usualHighPolarity`).
+ * Both sides come out in normal polarity, always: a BW12 pair wired normal/normal really does null
+ * at the crossover, and the sum of the ways shows it.
  * Every section uses the cookbook's bilinear transform pre-warped at the crossover frequency, so the
  * analog identities (LR sum = all-pass) hold exactly in the digital filters too.
  * Source: S. H. Linkwitz, "Active Crossover Networks for Noncoincident Drivers", J. Audio Eng. Soc.
@@ -66,8 +72,5 @@ export function crossoverSections(
   const f = requireBelowNyquist(frequencyHz, fs, 'The crossover frequency');
   if (fam === 'butterworth') return butterworthSections(s, slope / 6, f, fs);
   const half = butterworthSections(s, slope / 12, f, fs);
-  const sections = [...half, ...half.map((c) => ({ ...c }))];
-  if (!isPolarityInverted(fam, slope, s)) return sections;
-  // Negating one section's numerator flips the polarity of the whole cascade.
-  return sections.map((c, i) => (i === 0 ? { ...c, b0: -c.b0, b1: -c.b1, b2: -c.b2 } : c));
+  return [...half, ...half.map((c) => ({ ...c }))];
 }

@@ -22,3 +22,5 @@ export * from './crossover';
 export * from './filter-response';
 export * from './frequency-grid';
 export * from './wrap-phase';
+export * from './crossover-ways';
+export * from './analog-prototype';

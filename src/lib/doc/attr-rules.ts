@@ -1,5 +1,7 @@
 import { HEADING_LEVELS } from './extensions';
 import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
+import { PROCESSOR_BLOCKS, type ProcessorBlockType } from './blocks/block-data';
+import { processorBlockProblem } from '~/lib/schemas/processor-blocks';
 
 /**
  * Allowlists for the attributes of nodes and marks. ProseMirror's schema checks structure but
@@ -96,3 +98,12 @@ export function showValue(value: unknown): string {
   text = text.replace(/[\u0000-\u001f\u007f]/g, ' ');
   return `"${text.length > 60 ? `${text.slice(0, 57)}…` : text}"`;
 }
+
+/**
+ * Blocks whose attributes are nested data (bands, ways, outputs) are checked as a whole by their
+ * zod schema, after the schema's defaults fill what the input left out; the sentence names the
+ * band or way and the field.
+ */
+export const NODE_WHOLE_RULES: Record<string, (attrs: Record<string, unknown>) => string | null> = Object.fromEntries(
+  PROCESSOR_BLOCKS.map((type: ProcessorBlockType) => [type, (attrs: Record<string, unknown>) => processorBlockProblem(type, attrs)]),
+);

@@ -3,6 +3,9 @@ import { Image } from '@tiptap/extension-image';
 import { TaskItem, TaskList } from '@tiptap/extension-list';
 import { TableKit } from '@tiptap/extension-table';
 import { StarterKit } from '@tiptap/starter-kit';
+import { CrossoverBlock } from './blocks/crossover-block';
+import { DelayBlock } from './blocks/delay-block';
+import { EqBlock } from './blocks/eq-block';
 import { isSafeLinkHref } from './safe-url';
 
 /**
@@ -29,4 +32,7 @@ export const docExtensions: AnyExtension[] = [
   TaskList,
   TaskItem.configure({ nested: true }),
   Image.configure({ inline: false, allowBase64: false }),
+  EqBlock,
+  CrossoverBlock,
+  DelayBlock,
 ];

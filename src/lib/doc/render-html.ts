@@ -2,6 +2,7 @@ import { NODE_ATTR_RULES } from './attr-rules';
 import { escapeHtml } from './escape-html';
 import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
 import type { PmMark, PmNode } from './types';
+import { blockPlainText, processorBlockRenderers } from './render-blocks';
 
 /**
  * Renders a stored page document to HTML for the read view, on the server, with no editor code.
@@ -14,8 +15,10 @@ import type { PmMark, PmNode } from './types';
 export type BlockRenderer = (node: PmNode) => string;
 
 export interface RenderOptions {
-  /** Renderers for custom block nodes (processor blocks), keyed by node type. */
+  /** Renderers for custom block nodes, keyed by node type; the processor blocks have theirs by default. */
   blocks?: Record<string, BlockRenderer>;
+  /** Prefix for the ids inside processor-block plots, when one HTML page shows several renders. */
+  idPrefix?: string;
   /**
    * Whether an image's file can still be served. A photo deleted after a page used it is shown
    * as a short note instead of a broken image.
@@ -103,7 +106,8 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
   return html;
 }
 
-export function renderDocHtml(doc: PmNode, options: RenderOptions = {}): string {
+export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
+  const options = { ...given, blocks: { ...processorBlockRenderers(given.idPrefix), ...given.blocks } };
   const out: string[] = [];
   // Iterative, so a deeply nested stored document cannot overflow the stack.
   const stack: (PmNode | { close: string })[] = [doc];
@@ -220,6 +224,8 @@ export function docPlainText(doc: PmNode): string {
     }
     const lineBreak = inCell > 0 ? ' ' : '\n';
     if (node.type === 'hardBreak') parts.push(lineBreak);
+    const block = blockPlainText(node);
+    if (block) parts.push(`${lineBreak}${block}${lineBreak}`);
     if (BLOCK_BREAK.has(node.type)) parts.push(node.type === 'tableRow' ? '\n' : lineBreak);
     if (node.type === 'tableCell' || node.type === 'tableHeader') {
       inCell++;

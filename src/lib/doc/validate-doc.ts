@@ -1,5 +1,5 @@
 import { Node as PmModelNode, type Schema } from '@tiptap/pm/model';
-import { MARK_ATTR_RULES, NODE_ATTR_RULES, SCALAR_ATTR_RULE, showValue, type AttrRule } from './attr-rules';
+import { MARK_ATTR_RULES, NODE_ATTR_RULES, NODE_WHOLE_RULES, SCALAR_ATTR_RULE, showValue, type AttrRule } from './attr-rules';
 import { DOC_LIMITS } from './doc-limits';
 import { getDocSchema } from './doc-schema';
 import { docPlainText } from './render-html';
@@ -105,7 +105,9 @@ function checkNode(node: unknown, schema: Schema): void {
   } else if (node.text !== undefined) {
     throw new Refusal(`Only text parts carry "text", not a ${type} part.`);
   }
-  checkAttrs(node.attrs, type, Object.keys(nodeType.spec.attrs ?? {}), NODE_ATTR_RULES[type], 'block');
+  const whole = NODE_WHOLE_RULES[type];
+  if (whole) checkWholeAttrs(node.attrs, type, nodeType.spec.attrs ?? {}, whole);
+  else checkAttrs(node.attrs, type, Object.keys(nodeType.spec.attrs ?? {}), NODE_ATTR_RULES[type], 'block');
   if (node.marks !== undefined) {
     if (!Array.isArray(node.marks) || node.marks.length > 10) throw new Refusal('Text styles (marks) must be a short list.');
     for (const mark of node.marks) checkMark(mark, schema);
@@ -133,4 +135,15 @@ function checkAttrs(attrs: unknown, type: string, known: string[], rules: Record
   for (const [name, rule] of Object.entries(rules ?? {})) {
     if (rule.required && !(name in given)) throw new Refusal(rule.explain('a missing value'));
   }
+}
+
+function checkWholeAttrs(attrs: unknown, type: string, specs: Record<string, { default?: unknown }>, rule: (attrs: Record<string, unknown>) => string | null): void {
+  if (attrs !== undefined && attrs !== null && !isPlainObject(attrs)) throw new Refusal(`The attributes of a ${type} block must be an object.`);
+  const given = (attrs ?? {}) as Record<string, unknown>;
+  for (const name of Object.keys(given)) {
+    if (!(name in specs)) throw new Refusal(`The ${type} block has no attribute ${showValue(name)}; remove it.`);
+  }
+  const merged = Object.fromEntries(Object.entries(specs).map(([name, spec]) => [name, name in given ? given[name] : spec.default]));
+  const problem = rule(merged);
+  if (problem) throw new Refusal(problem);
 }

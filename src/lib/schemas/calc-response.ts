@@ -7,10 +7,16 @@ import { z } from 'zod';
 import { FILTER_TYPES, LIMITS, type FilterSpec } from '~/lib/acoustics';
 import { formatNumber } from '~/lib/acoustics/guards';
 import { outOfRange, shown } from './calc-params';
+import { XoverWaySchema } from './processor-blocks';
+import { BLOCK_LIMITS } from '~/lib/doc/blocks/block-data';
 
 const FAMILIES = ['butterworth', 'linkwitz-riley'] as const;
 const FILTER_KEYS = ['type', 'freq', 'gain', 'q', 'slope', 'family'];
 const EXAMPLE_FILTER = '{"type":"peaking","freq":1000,"gain":-3,"q":1.4}';
+const EXAMPLE_WAY = '[{"lowPass":{"family":"linkwitz-riley","slope":24,"freq":90},"highPass":null,"gain":0,"polarity":"normal","delayMs":4.1}]';
+
+/** A crossover way as a page's crossover block stores it; the name is optional here. */
+const CalcWaySchema = XoverWaySchema.extend({ name: XoverWaySchema.shape.name.optional() });
 
 /** "Filter 2: " for a path inside filters[1], nothing at the top level. */
 function where(path: readonly PropertyKey[] | undefined): string {
@@ -83,8 +89,9 @@ function checkFilter(ctx: Ctx, filter: FilterSpec, index: number, sampleRate: nu
     return !message;
   };
   const nyquist = sampleRate / 2;
-  const nyquistHint = `At ${formatNumber(sampleRate)} Hz sampling nothing at or above ${formatNumber(nyquist)} Hz (half the sample rate) exists; lower freq or raise sampleRate.`;
-  if (!problem('freq', outOfRange(filter.freq, { min: LIMITS.frequencyHz.min, max: nyquist, maxExclusive: true }, label('freq'), 'Hz', nyquistHint))) return false;
+  const top = BLOCK_LIMITS.maxFractionOfFs * sampleRate;
+  const nyquistHint = `At ${formatNumber(sampleRate)} Hz sampling a filter must sit below 0.49 × the sample rate: closer to ${formatNumber(nyquist)} Hz (half the sample rate) a digital filter no longer behaves as its settings say, and nothing exists above it. Lower freq or raise sampleRate.`;
+  if (!problem('freq', outOfRange(filter.freq, { min: LIMITS.frequencyHz.min, max: top, maxExclusive: true }, label('freq'), 'Hz', nyquistHint))) return false;
   const isShelf = filter.type === 'lowshelf' || filter.type === 'highshelf';
   const isCrossover = filter.type === 'crossover-low' || filter.type === 'crossover-high';
   if ((filter.type === 'peaking' || isShelf) && filter.gain !== undefined) {
@@ -111,11 +118,12 @@ export const ResponseBodySchema = z
       sampleRate: jsonNumber('sampleRate', "the processor's sample rate in Hz, e.g. 48000"),
       filters: boundedList(FilterSchema, LIMITS.maxFilters, 'filters', `[${EXAMPLE_FILTER}]`),
       freqs: boundedList(jsonNumber('freqs', 'each a frequency in Hz'), LIMITS.maxResponsePoints, 'freqs', '[100, 1000, 10000]').optional(),
+      ways: boundedList(CalcWaySchema, BLOCK_LIMITS.maxWays, 'ways', EXAMPLE_WAY).optional(),
     },
     {
       error: (issue) =>
         issue.code === 'unrecognized_keys'
-          ? `Unknown field ${issue.keys.map((k) => `"${k}"`).join(', ')} in the body; send sampleRate, filters and optionally freqs.`
+          ? `Unknown field ${issue.keys.map((k) => `"${k}"`).join(', ')} in the body; send sampleRate, filters and optionally freqs and ways.`
           : `Send a JSON object like {"sampleRate":48000,"filters":[${EXAMPLE_FILTER}]}.`,
     },
   )
@@ -135,7 +143,16 @@ export const ResponseBodySchema = z
         return z.NEVER;
       }
     }
-    return { sampleRate: body.sampleRate, filters, freqs: body.freqs };
+    for (const [i, way] of (body.ways ?? []).entries()) {
+      for (const side of ['highPass', 'lowPass'] as const) {
+        const edge = way[side];
+        if (edge && edge.freq >= BLOCK_LIMITS.maxFractionOfFs * body.sampleRate) {
+          ctx.issues.push({ code: 'custom', message: `Way ${i + 1}, ${side}: freq must be below 0.49 × the sample rate (${formatNumber(BLOCK_LIMITS.maxFractionOfFs * body.sampleRate)} Hz); nearer half the sample rate a digital filter no longer behaves as set.`, path: ['ways', i, side, 'freq'], input: edge.freq });
+          return z.NEVER;
+        }
+      }
+    }
+    return { sampleRate: body.sampleRate, filters, freqs: body.freqs, ways: body.ways };
   });
 
 export type ResponseBody = z.infer<typeof ResponseBodySchema>;

@@ -34,7 +34,8 @@ export interface PageRef {
 /** A file as the API and the files screen see it. */
 export interface FileView {
   id: string;
-  kind: 'image' | 'pdf';
+  /** `trace`: a measured response uploaded as plain-text columns (see src/lib/traces). */
+  kind: 'image' | 'pdf' | 'trace';
   mime: string;
   /** The uploader's file name, cleaned; display text only. */
   originalName: string;

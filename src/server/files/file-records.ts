@@ -20,7 +20,7 @@ export function toFileView(row: FileRow, extra: { page: PageRef | null; usedBy: 
   const url = `/files/${row.id}`;
   return {
     id: row.id,
-    kind: isImage ? 'image' : 'pdf',
+    kind: isImage ? 'image' : row.mime.startsWith('text/plain') ? 'trace' : 'pdf',
     mime: row.mime,
     originalName: row.originalName,
     caption: row.caption,

@@ -13,7 +13,8 @@ import { fsyncFile, publish, writeDurably } from './durable-write';
 import { loadVenueFile } from './file-records';
 import { processImage } from './process-image';
 import { receiveUpload } from './receive-upload';
-import { sniffType } from './sniff-type';
+import { readTraceUpload, TRACE_MIME } from './read-trace-upload';
+import { NOT_ACCEPTED, sniffType } from './sniff-type';
 import { asStorageError } from './storage-errors';
 import { ensureStorageReady } from './storage-sweep';
 import { newTempPath, storedNameFor, storedPath } from './storage-paths';
@@ -96,6 +97,31 @@ async function prepare(received: Awaited<ReturnType<typeof receiveUpload>>, temp
       displayName: null,
       thumbName: null,
       mime: 'application/pdf',
+      sizeBytes: received.sizeBytes,
+      width: null,
+      height: null,
+      originalName: name,
+    };
+  }
+  if (type.kind === 'text') {
+    // The original text is kept byte for byte (it is what the engineer exported); the parsed,
+    // compact form is stored beside it as the trace's "display" rendition, read by every plot.
+    const { compact } = await readTraceUpload(received.tempPath, NOT_ACCEPTED);
+    await fsyncFile(received.tempPath);
+    const storageName = storedNameFor(received.sha256, 'original', 'txt');
+    const compactTemp = newTempPath('json');
+    temps.push(compactTemp);
+    await writeDurably(compactTemp, compact);
+    const displayName = storedNameFor(received.sha256, 'display', 'json');
+    return {
+      moves: [
+        { temp: received.tempPath, name: storageName },
+        { temp: compactTemp, name: displayName },
+      ],
+      storageName,
+      displayName,
+      thumbName: null,
+      mime: TRACE_MIME,
       sizeBytes: received.sizeBytes,
       width: null,
       height: null,

@@ -41,7 +41,7 @@ export function parseVariant(raw: string | undefined): FileVariant {
   throw new HttpError(404, 'There is no such size of this file; use original, display or thumb.');
 }
 
-const EXT_FOR_MIME: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf' };
+const EXT_FOR_MIME: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'application/pdf': 'pdf', 'text/plain; charset=utf-8': 'txt', 'application/json': 'json' };
 
 /**
  * The stored bytes with headers that keep a browser from guessing: the type we decided,
@@ -51,8 +51,8 @@ const EXT_FOR_MIME: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png':
 export async function fileResponse(row: FileRow, variant: FileVariant, request: Request, download: boolean): Promise<Response> {
   await ensureStorageReady();
   const name = variant === 'original' ? row.storageName : variant === 'display' ? row.displayName : row.thumbName;
-  if (!name) throw new HttpError(404, 'This file has only its original (PDFs have no display size or thumbnail).');
-  const mime = variant === 'original' ? row.mime : 'image/webp';
+  if (!name) throw new HttpError(404, 'This file has only its original (PDFs and traces have no display size or thumbnail).');
+  const mime = variant === 'original' ? row.mime : name.endsWith('.json') ? 'application/json' : 'image/webp';
   const etag = `"${name}"`;
   const headers: Record<string, string> = {
     'content-type': mime,

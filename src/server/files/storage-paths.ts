@@ -6,7 +6,7 @@ import { getConfig } from '~/server/config';
  * Where uploads live. Stored names are made only by this module from a SHA-256 hex digest, and
  * every path is checked against that shape again, so no text from a request ever reaches a path.
  */
-export const STORED_NAME = /^[0-9a-f]{64}(\.(jpg|png|webp|pdf)|-display\.webp|-thumb\.webp)$/;
+export const STORED_NAME = /^[0-9a-f]{64}(\.(jpg|png|webp|pdf|txt)|-display\.(webp|json)|-thumb\.webp)$/;
 
 export function uploadsDir(): string {
   return resolve(getConfig().UPLOADS_DIR);
@@ -30,7 +30,8 @@ export type Rendition = 'original' | 'display' | 'thumb';
 
 /** Names derive from the hash of the stored original; renditions are made from it deterministically. */
 export function storedNameFor(sha256Hex: string, rendition: Rendition, ext: string): string {
-  if (rendition === 'display') return `${sha256Hex}-display.webp`;
+  // A trace's display rendition is its parsed form (JSON); a photo's is a WebP.
+  if (rendition === 'display') return `${sha256Hex}-display.${ext === 'json' ? 'json' : 'webp'}`;
   if (rendition === 'thumb') return `${sha256Hex}-thumb.webp`;
   return `${sha256Hex}.${ext}`;
 }

@@ -28,7 +28,7 @@ export default function BandTablePanel({ s, set }: BandPanelProps) {
       </div>
       <Result outcome={outcome} testId="bands-result">
         {(bands) => (
-          <div className="max-h-96 overflow-auto">
+          <div className="max-h-96 overflow-auto" tabIndex={0} role="region" aria-label="Band table (scrolls)">
             <table className="w-full text-right text-sm tabular-nums" data-testid="bands-table">
               <caption className="pb-2 text-left text-muted">{bands.length} bands</caption>
               <thead className="sticky top-0 bg-sunken text-xs uppercase text-muted">

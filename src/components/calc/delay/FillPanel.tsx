@@ -6,6 +6,8 @@ import { attempt, num } from '~/components/calc/attempt';
 import { fixed } from '~/components/calc/format';
 import { toMeters } from '~/components/calc/unit-switch';
 import { GUIDE, type DelayPanelProps } from './delay-state';
+import SaveToPage from '~/components/calc/SaveToPage';
+import { delayBlockFromCalc } from '~/lib/doc/blocks/calc-blocks';
 
 /** Delay for a fill loudspeaker so the main arrives first at the listener. */
 export default function FillPanel({ s, set, air }: DelayPanelProps) {
@@ -42,6 +44,29 @@ export default function FillPanel({ s, set, air }: DelayPanelProps) {
           </div>
         )}
       </Result>
+      <SaveToPage
+        testId="fill-save"
+        build={() =>
+          outcome.ok && outcome.value.delayOn === 'fill'
+            ? {
+                // The fill's delay is the path difference plus the offset: stored as that distance so it follows the temperature.
+                nodes: [
+                  delayBlockFromCalc({
+                    name: 'Fill',
+                    label: 'Fill alignment from the calculator',
+                    sampleRate: num(s.rate, 'the sample rate'),
+                    temperature: num(s.temp, 'the temperature'),
+                    tempUnit: s.tempUnit === 'F' ? 'F' : 'C',
+                    distance: Math.max(0, num(s.main, 'the distance to the main') - num(s.fill, 'the distance to the fill')),
+                    unit: s.unit === 'ft' ? 'ft' : 'm',
+                    offsetMs: num(s.offset, 'the precedence offset'),
+                  }),
+                ],
+                summary: `Fill delay ${fixed(outcome.value.delayMs, 2)} ms from the fill calculator`,
+              }
+            : null
+        }
+      />
     </Panel>
   );
 }

@@ -7,6 +7,8 @@ import { attempt, num } from '~/components/calc/attempt';
 import { fixed } from '~/components/calc/format';
 import { fromMeters, toMeters } from '~/components/calc/unit-switch';
 import { GUIDE, type DelayPanelProps } from './delay-state';
+import SaveToPage from '~/components/calc/SaveToPage';
+import { delayBlockFromCalc } from '~/lib/doc/blocks/calc-blocks';
 
 /** Distance ↔ milliseconds ↔ samples, from either end. */
 export default function TravelPanel({ s, set, air }: DelayPanelProps) {
@@ -45,6 +47,26 @@ export default function TravelPanel({ s, set, air }: DelayPanelProps) {
           </div>
         )}
       </Result>
+      <SaveToPage
+        testId="travel-save"
+        build={() =>
+          outcome.ok && air.ok
+            ? {
+                nodes: [
+                  delayBlockFromCalc({
+                    name: 'Output',
+                    label: 'Delay from the calculator',
+                    sampleRate: num(s.rate, 'the sample rate'),
+                    temperature: num(s.temp, 'the temperature'),
+                    tempUnit: s.tempUnit === 'F' ? 'F' : 'C',
+                    ...(fromDistance ? { distance: num(s.dist, 'the distance'), unit: s.unit === 'ft' ? 'ft' : 'm' } : { timeMs: outcome.value.ms }),
+                  }),
+                ],
+                summary: `Delay ${fixed(outcome.value.ms, 2)} ms from the delay calculator`,
+              }
+            : null
+        }
+      />
     </Panel>
   );
 }

@@ -1,4 +1,4 @@
-import { AXIS_LABELS, PLOT_WIDTH, curvePath, hzLabel, xOf } from './plot-scale';
+import { AXIS_LABELS, PLOT_WIDTH, curvePath, hzLabel, xOf, yScale } from '~/lib/plot/frequency-axis';
 
 interface Grid {
   decades: number[];
@@ -30,8 +30,7 @@ interface Props {
 export default function PlotPane({ label, unit, height, top, bottom, yTicks, freqs, values, grid, strokeClass, wrapAt, showFrequencyLabels, testId }: Props) {
   // Values past the range leave the box steeply and are cut off by the SVG edge, instead of
   // crawling along the border as if the response were flat there.
-  const margin = (top - bottom) * 0.2;
-  const yOf = (v: number) => ((top - Math.min(top + margin, Math.max(bottom - margin, v))) / (top - bottom)) * height;
+  const yOf = yScale(top, bottom, height);
   const pct = (y: number) => `${(y / height) * 100}%`;
   const line = 'fill-none [vector-effect:non-scaling-stroke]';
   return (
@@ -56,7 +55,7 @@ export default function PlotPane({ label, unit, height, top, bottom, yTicks, fre
       {showFrequencyLabels && (
         <div className="relative h-5" aria-hidden="true">
           {AXIS_LABELS.map((f) => (
-            <span key={f} className="absolute -translate-x-1/2 text-[11px] tabular-nums text-muted first:translate-x-0" style={{ left: `${(xOf(f) / PLOT_WIDTH) * 100}%` }}>
+            <span key={f} className="absolute -translate-x-1/2 text-[11px] tabular-nums text-muted first:translate-x-0 last:-translate-x-full" style={{ left: `${(xOf(f) / PLOT_WIDTH) * 100}%` }}>
               {hzLabel(f)}
             </span>
           ))}

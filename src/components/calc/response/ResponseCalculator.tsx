@@ -1,11 +1,14 @@
 import { useRef } from 'react';
 import { LIMITS, cascadeResponse, logFrequencyGrid, type CascadeResponse } from '~/lib/acoustics';
+import { F_MAX, F_MIN } from '~/lib/plot/frequency-axis';
 import Panel from '~/components/calc/Panel';
 import SelectField from '~/components/calc/SelectField';
 import { attempt, num } from '~/components/calc/attempt';
 import { SAMPLE_RATES } from '~/components/calc/unit-switch';
 import { useQueryState } from '~/components/calc/use-query-state';
 import FilterRow from './FilterRow';
+import SaveToPage from '~/components/calc/SaveToPage';
+import { blocksFromFilters } from '~/lib/doc/blocks/calc-blocks';
 import ResponsePlot from './ResponsePlot';
 import { DEFAULT_CHAIN, decodeFilters, encodeFilters, toSpec, type FilterDraft } from './filter-draft';
 
@@ -23,7 +26,7 @@ export default function ResponseCalculator({ search }: { search: string }) {
   const write = (next: FilterDraft[]) => set({ f: encodeFilters(next) });
   const outcome = attempt(() => {
     const rate = num(s.rate, 'the sample rate');
-    const grid = logFrequencyGrid(10, Math.min(24_000, rate / 2), POINTS);
+    const grid = logFrequencyGrid(F_MIN, Math.min(F_MAX, rate / 2), POINTS);
     return { rate, response: cascadeResponse(filters.map(toSpec), grid, rate) };
   });
   if (outcome.ok) lastGood.current = outcome.value.response;
@@ -38,6 +41,17 @@ export default function ResponseCalculator({ search }: { search: string }) {
           </p>
         )}
         {shown && <ResponsePlot freqs={shown.freqs} magnitudeDb={shown.magnitudeDb} phaseDeg={shown.phaseDeg} nyquistHz={rate / 2} />}
+        <p className="text-xs text-muted">
+          Q per the Audio EQ Cookbook: width between the half-gain points of the analog prototype. Near half the sample rate the digital band is narrower than its Q says.
+        </p>
+        <SaveToPage
+          testId="response-save"
+          build={() => {
+            if (!outcome.ok) return null;
+            const nodes = blocksFromFilters(filters.map(toSpec), outcome.value.rate, 'Filters from the response calculator');
+            return nodes.length ? { nodes, summary: `${filters.length} filters from the response calculator` } : null;
+          }}
+        />
       </Panel>
       <Panel title="Filter chain" guide={`${GUIDE}#filter-chain`} testId="chain-panel">
         <SelectField label="Processor sample rate" value={s.rate} options={SAMPLE_RATES} onChange={(r) => set({ rate: r })} testId="response-rate" />

@@ -1,6 +1,5 @@
-import { DECADES, OCTAVE_CENTRES, PLOT_WIDTH, xOf } from './plot-scale';
+import { AXIS_LABELS, DECADES, F_MAX, PLOT_WIDTH, dbRange, ticks, xOf } from '~/lib/plot/frequency-axis';
 import PlotPane from './PlotPane';
-import { dbRange, ticks } from './plot-scale';
 
 interface Props {
   freqs: readonly number[];
@@ -12,7 +11,7 @@ interface Props {
 /** Magnitude above phase, sharing one log frequency axis; drawn as SVG so it stays sharp on any phone. */
 export default function ResponsePlot({ freqs, magnitudeDb, phaseDeg, nyquistHz }: Props) {
   const range = dbRange(magnitudeDb);
-  const grid = { decades: DECADES.map(xOf), octaves: OCTAVE_CENTRES.filter((f) => !DECADES.includes(f)).map(xOf), nyquist: nyquistHz < 24_000 ? xOf(nyquistHz) : undefined };
+  const grid = { decades: DECADES.map(xOf), octaves: AXIS_LABELS.filter((f) => !DECADES.includes(f)).map(xOf), nyquist: nyquistHz < F_MAX ? xOf(nyquistHz) : undefined };
   return (
     <figure className="flex flex-col gap-2" data-testid="response-plot" aria-label="Frequency response: magnitude and phase">
       <PlotPane
@@ -44,7 +43,7 @@ export default function ResponsePlot({ freqs, magnitudeDb, phaseDeg, nyquistHz }
         testId="plot-phase"
       />
       <figcaption className="sr-only">
-        Plot from 10 Hz to 24 kHz on a logarithmic axis, {PLOT_WIDTH} units wide; magnitude from {range.bottom} to {range.top} dB.
+        Plot from 20 Hz to 20 kHz on a logarithmic axis, {PLOT_WIDTH} units wide; magnitude from {range.bottom} to {range.top} dB.
       </figcaption>
     </figure>
   );

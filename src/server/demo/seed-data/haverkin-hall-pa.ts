@@ -8,6 +8,7 @@
  */
 import { b, code, doc, h, hr, i, note, ol, p, table, ul } from './doc-builder';
 import { dateDaysAgo } from './sections';
+import { delaysBlock, mainsEqBlock, subEqBlock, subMainCrossoverBlock } from './haverkin-hall-blocks';
 import type { PmNode, SeedPage } from './types';
 
 type Subs = 'broadside' | 'cardioid';
@@ -156,20 +157,7 @@ function systemProcessing(state: RigState): PmNode {
           ['5', 'Subs S3 + S4 (centre)', '9.0 ms', 'Normal', 'Arc'],
           ['6', 'Spare', '', '', ''],
         ];
-  const eq =
-    state.subs === 'cardioid'
-      ? [
-          'High-pass 90 Hz LR24 (matches the sub low-pass 90 Hz LR24).',
-          '−1.0 dB at 160 Hz, Q 1.2 (was −3 dB at 180 Hz before the cardioid subs).',
-          '−2.0 dB at 400 Hz, Q 2.0.',
-          '−2.5 dB at 2.6 kHz, Q 2.5.',
-        ]
-      : [
-          'High-pass 90 Hz LR24 (matches the sub low-pass 90 Hz LR24).',
-          '−3.0 dB at 180 Hz, Q 1.2 (low-mid build-up from the stage and back wall).',
-          '−2.0 dB at 400 Hz, Q 2.0.',
-          '−2.5 dB at 2.6 kHz, Q 2.5.',
-        ];
+  const tune = { cardioid: state.subs === 'cardioid', delaysRehung: state.delaysRehung };
   return doc(
     h(2, 'Processor'),
     ul(
@@ -198,16 +186,14 @@ function systemProcessing(state: RigState): PmNode {
       ['11–12', 'Balcony delays L/R (rack C)', bd.set, 'Normal', 'HP 100 Hz'],
     ),
     h(2, 'Crossover and EQ'),
+    subMainCrossoverBlock(tune),
     h(3, 'Mains'),
-    ul(...eq),
+    mainsEqBlock(tune),
     h(3, 'Subs'),
-    ul(
-      'Low-pass 90 Hz LR24, high-pass 27 Hz 24 dB/oct.',
-      state.subs === 'cardioid' ? '−2.5 dB at 52 Hz, Q 5 (room mode along the length of the hall).' : '−4.0 dB at 52 Hz, Q 5 (room mode along the length of the hall).',
-      state.subs === 'cardioid'
-        ? 'Sub level +1.5 dB against HOUSE 2.0: the rear boxes take some forward output away.'
-        : 'Sub-to-main alignment done at FOH, phase matched at 90 Hz.',
-    ),
+    subEqBlock(tune),
+    p(state.subs === 'cardioid' ? 'Sub level +1.5 dB against HOUSE 2.0: the rear boxes take some forward output away.' : 'Sub-to-main alignment done at FOH, phase matched at 90 Hz.'),
+    h(3, 'Fills and delays'),
+    delaysBlock(tune),
     h(3, 'Target'),
     p('About 8 dB rise from 1 kHz down to 60 Hz, flat to 6 kHz, gently down to −4 dB at 16 kHz, measured at FOH and balcony row 5 and averaged over eight positions.'),
     ...(state.subs === 'cardioid'
