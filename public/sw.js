@@ -7,6 +7,11 @@
  * - /_astro/*: cache first (file names carry a content hash, so a cached file never goes stale).
  * - /calc pages and guides: network first, the saved copy when the network fails or stalls.
  * - /api/calc/* GET answers: network first, a saved copy offline. Nothing else under /api.
+ * - The advance sheet (/advance/<token> for guests, /venues/<venue>/advance for members) and the
+ *   photos it shows: network first, the copy saved on the last visit when offline (the page says
+ *   when it was saved). A 404 from the network (a revoked pass) deletes the saved copy. Signing
+ *   out deletes the members' copies (src/pages/signout.astro).
+ * - Any other page opened without network: our own offline page, nothing stored.
  * - Anything else (venues, sign-in, signed-in pages) is left to the browser and never stored;
  *   a calculator page is stored only when the server marked it as rendered for nobody in
  *   particular (x-throwline-offline: anonymous), so no signed-in person's name is ever kept.
@@ -15,7 +20,9 @@ const VERSION = 'v1';
 const PAGES = `throwline-calc-pages-${VERSION}`;
 const ASSETS = `throwline-calc-assets-${VERSION}`;
 const ANSWERS = `throwline-calc-api-${VERSION}`;
+const ADVANCE = `throwline-advance-${VERSION}`;
 const OURS = [PAGES, ASSETS, ANSWERS];
+const MAX_ADVANCE = 400;
 const PAGE_LIST = '/calc/offline-pages.json';
 /** Stored last: its presence means everything before it was saved. */
 const READY_MARK = '/calc/__offline-ready';
@@ -26,6 +33,8 @@ const MAX_ASSETS = 300;
 const MAX_ANSWERS = 200;
 
 const isCalcPath = (path) => path === '/calc' || path.startsWith('/calc/');
+const isAdvancePage = (path) => /^\/advance\/[A-Za-z0-9_-]{43}$/.test(path) || /^\/venues\/[^/]+\/advance$/.test(path);
+const isGuestFile = (path) => /^\/advance\/[A-Za-z0-9_-]{43}\/files\//.test(path);
 
 self.addEventListener('install', (event) => {
   event.waitUntil(precache().then(() => self.skipWaiting()));
@@ -35,7 +44,7 @@ self.addEventListener('activate', (event) => {
   event.waitUntil(
     (async () => {
       for (const key of await caches.keys()) {
-        if (key.startsWith('throwline-calc-') && !OURS.includes(key)) await caches.delete(key);
+        if ((key.startsWith('throwline-calc-') && !OURS.includes(key)) || (key.startsWith('throwline-advance-') && key !== ADVANCE)) await caches.delete(key);
       }
       await self.clients.claim();
     })(),
@@ -52,7 +61,10 @@ self.addEventListener('fetch', (event) => {
   else if (path.startsWith('/api/calc/')) event.respondWith(answer(request));
   else if (path.startsWith('/api/')) return;
   else if (isCalcPath(path)) event.respondWith(page(event, url));
+  else if (isAdvancePage(path)) event.respondWith(advancePage(event, url));
+  else if (isGuestFile(path) || path.startsWith('/files/')) event.respondWith(advanceFile(event, url));
   else if (path === '/manifest.webmanifest' || path === '/favicon.svg' || path.startsWith('/icons/')) event.respondWith(staticFile(event, url));
+  else if (request.mode === 'navigate') event.respondWith(fetch(request).catch(() => offlinePage()));
 });
 
 // ---------------------------------------------------------------------------------------------
@@ -135,15 +147,55 @@ async function asset(event, url) {
   const hit = await cache.match(url.origin + url.pathname);
   if (hit) return hit;
   const response = await fetch(event.request);
-  // Only files a calculator page asked for are kept; the rest of the app stays out of this cache.
-  if (response.ok && (await fromCalculatorPage(event))) keepAlive(event, cache.put(url.origin + url.pathname, response.clone()));
+  // Only files a calculator page or the advance sheet asked for are kept; the rest stays out.
+  const from = await clientPath(event);
+  if (response.ok && from && (isCalcPath(from) || isAdvancePage(from))) keepAlive(event, cache.put(url.origin + url.pathname, response.clone()));
   return response;
 }
 
-async function fromCalculatorPage(event) {
+async function clientPath(event) {
   const id = event.clientId || event.resultingClientId;
   const client = id ? await self.clients.get(id) : undefined;
-  return Boolean(client) && isCalcPath(new URL(client.url).pathname);
+  return client ? new URL(client.url).pathname : null;
+}
+
+/** The advance sheet: the network when it answers, else the copy from the last visit. */
+async function advancePage(event, url) {
+  const key = url.origin + url.pathname;
+  const cache = await caches.open(ADVANCE);
+  const network = fetch(event.request).then(async (response) => {
+    if (response.status === 200) keepAlive(event, cache.put(key, response.clone()));
+    // A revoked or expired pass, or a member removed: the saved copy must not outlive the access.
+    else if (response.status === 404 || response.status === 401 || response.redirected) keepAlive(event, cache.delete(key));
+    return response;
+  });
+  network.catch(() => undefined);
+  try {
+    return await withTimeout(network, NETWORK_TIMEOUT_MS);
+  } catch {
+    const saved = await cache.match(key);
+    if (saved) return saved;
+    return network.catch(() => offlinePage());
+  }
+}
+
+/** Photos of the advance sheet: saved when the sheet asked for them, served from the copy offline. */
+async function advanceFile(event, url) {
+  const cache = await caches.open(ADVANCE);
+  const key = url.origin + url.pathname;
+  const from = isGuestFile(url.pathname) ? url.pathname : await clientPath(event);
+  const keep = Boolean(from) && (isGuestFile(url.pathname) || isAdvancePage(from));
+  try {
+    const response = await fetch(event.request);
+    if (keep && response.status === 200) {
+      keepAlive(event, cache.put(key, response.clone()).then(() => trim(cache, MAX_ADVANCE)));
+    }
+    return response;
+  } catch (error) {
+    const saved = await cache.match(key);
+    if (saved) return saved;
+    throw error;
+  }
 }
 
 /** The query is ignored for the saved copy: the calculators read their inputs from the address. */
@@ -233,7 +285,7 @@ function offlinePage() {
   const body =
     '<!doctype html><html lang="en"><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">' +
     '<title>Offline · Throwline</title><body style="font-family:system-ui,sans-serif;background:#121317;color:#e9e6df;padding:1.5rem">' +
-    '<h1>No network</h1><p>This page has not been saved on this device yet. The calculators are saved after one visit with a connection.</p>' +
+    '<h1>No network</h1><p>This page has not been saved on this device yet. The calculators, and an advance sheet you have opened once, are saved after one visit with a connection.</p>' +
     '<p><a style="color:#f08a4b" href="/calc">Open the calculators</a></p></body></html>';
   return new Response(body, { status: 503, headers: { 'content-type': 'text/html; charset=utf-8' } });
 }

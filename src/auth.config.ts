@@ -25,6 +25,7 @@ const config: AuthConfig & { prefix: string } = {
       if (user?.id) {
         token.sub = user.id;
         token.authTime = Date.now();
+        token.epoch = (user as { sessionEpoch?: number }).sessionEpoch ?? 0;
       }
       const authTime = Number(token.authTime);
       if (!Number.isFinite(authTime) || Date.now() - authTime > SESSION_LIFETIME_SECONDS * 1000) return null;

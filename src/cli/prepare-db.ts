@@ -19,6 +19,7 @@ async function main() {
   if (result.seeded) {
     console.log('Seeded the demo venues. Demo accounts (demo only — never use these on a real instance):');
     for (const a of result.accounts) console.log(`  ${a.email.padEnd(28)} ${a.role}`);
+    if (result.guestLink) console.log(`Demo guest pass (shown only now): ${result.guestLink}`);
     console.log(`  password: the DEMO_PASSWORD setting${process.env.DEMO_PASSWORD ? '' : ' (default "throwline-demo")'}`);
     if (config.SEED_DEMO_PHOTOS) {
       const { seedDemoPhotos } = await import('~/server/demo/seed-photos');

@@ -27,3 +27,10 @@ console.log('→ lint (eslint, layer boundaries)…');
 run(process.execPath, ['node_modules/eslint/bin/eslint.js', '--max-warnings', '0', '.']);
 
 run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--config', 'tests/vitest.config.ts', ...process.argv.slice(2)]);
+
+// The whole suite also runs the short form of the reliability proof (a few minutes; the full
+// form is `npm run proof`). A filtered run (`npm test -- some/file`) skips it.
+if (process.argv.length <= 2) {
+  console.log('→ reliability proof, short form (npm run proof -- --short)…');
+  run(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'tests/proof/run.ts', '--short']);
+}

@@ -67,6 +67,8 @@ export interface SaveConflictBody<When = string> extends ApiErrorBody {
 export interface HistoryAnswer<When = string> {
   page: { slug: string; title: string; currentRevision: number };
   revisions: RevisionSummary<When>[];
+  /** Where the next, older page of the history starts; null when revision 1 is listed. */
+  nextBefore: number | null;
 }
 
 /** GET /api/venues/:venue/pages/:page/revisions/:n */

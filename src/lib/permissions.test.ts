@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { can, type Action, type Role } from './permissions';
+import { can, readScope, type Action, type Role } from './permissions';
 
 // The expected matrix is DESIGN.md's roles table, written out independently of the implementation.
 const table: Record<Action, Record<'admin' | Role | 'none', boolean>> = {
   'venue.read': { admin: true, manager: true, engineer: true, viewer: true, none: false },
   'advance.read': { admin: true, manager: true, engineer: true, viewer: true, none: false },
   'page.edit': { admin: true, manager: true, engineer: true, viewer: false, none: false },
+  'page.check': { admin: true, manager: true, engineer: true, viewer: false, none: false },
   'file.upload': { admin: true, manager: true, engineer: true, viewer: false, none: false },
   'file.delete': { admin: true, manager: true, engineer: true, viewer: false, none: false },
   'members.manage': { admin: true, manager: true, engineer: false, viewer: false, none: false },
@@ -31,5 +32,25 @@ describe('can()', () => {
 
   it('does not let a role in one venue stand for another (no venue access given)', () => {
     expect(can({ id: 'u1', isAdmin: false }, 'venue.read', null)).toBe(false);
+  });
+
+  it('lets a guest read only the advance sheet of the venue their pass is for', () => {
+    const guest = { guestPassId: 'p1', venueId: 'v1' };
+    const actions = Object.keys(table) as Action[];
+    for (const action of actions) {
+      // The role a guest might claim is ignored; only the venue id of the pass counts.
+      expect(can(guest, action, { role: 'manager', venueId: 'v1' })).toBe(action === 'advance.read');
+      expect(can(guest, action, { role: 'manager', venueId: 'v2' })).toBe(false);
+    }
+    expect(can(guest, 'advance.read', { role: null })).toBe(false);
+  });
+});
+
+describe('readScope()', () => {
+  it('names one rule per kind of principal', () => {
+    expect(readScope(null)).toEqual({ kind: 'none' });
+    expect(readScope({ id: 'a', isAdmin: true })).toEqual({ kind: 'all' });
+    expect(readScope({ id: 'u', isAdmin: false })).toEqual({ kind: 'memberships', userId: 'u' });
+    expect(readScope({ guestPassId: 'p', venueId: 'v' })).toEqual({ kind: 'advance-of', venueId: 'v' });
   });
 });

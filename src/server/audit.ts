@@ -1,5 +1,6 @@
-import { auditEvents } from '~/db/schema';
-import type { Tx } from './db';
+import { and, desc, eq, like, sql } from 'drizzle-orm';
+import { auditEvents, users } from '~/db/schema';
+import { getDb, type Tx } from './db';
 
 export interface AuditEntry {
   venueId: string | null;
@@ -13,4 +14,25 @@ export interface AuditEntry {
 /** Written inside the same transaction as the change, so the log never disagrees with the data. */
 export async function recordAudit(tx: Tx, entry: AuditEntry): Promise<void> {
   await tx.insert(auditEvents).values({ ...entry, targetId: entry.targetId ?? null, detail: entry.detail ?? null });
+}
+
+export const AUDIT_PAGE_SIZE = 50;
+
+/** A venue's audit events, newest first, filtered by who and by kind (the part before the dot). */
+export async function listAudit(venueId: string, filter: { actor?: string; kind?: string; page: number }) {
+  const db = await getDb();
+  const where = and(
+    eq(auditEvents.venueId, venueId),
+    filter.actor ? eq(auditEvents.actorId, filter.actor) : undefined,
+    filter.kind ? like(auditEvents.action, `${filter.kind}.%`) : undefined,
+  );
+  const rows = await db
+    .select({ id: auditEvents.id, action: auditEvents.action, targetType: auditEvents.targetType, targetId: auditEvents.targetId, detail: auditEvents.detail, createdAt: auditEvents.createdAt, actorId: auditEvents.actorId, actorName: users.name })
+    .from(auditEvents)
+    .leftJoin(users, eq(users.id, auditEvents.actorId))
+    .where(where)
+    .orderBy(desc(auditEvents.createdAt), desc(sql`${auditEvents}.rowid`))
+    .limit(AUDIT_PAGE_SIZE + 1)
+    .offset((filter.page - 1) * AUDIT_PAGE_SIZE);
+  return { events: rows.slice(0, AUDIT_PAGE_SIZE), page: filter.page, hasMore: rows.length > AUDIT_PAGE_SIZE };
 }

@@ -30,6 +30,23 @@ export const ConfigSchema = z.object({
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   /** Set to 1 only behind a TLS-terminating proxy that sets X-Forwarded-Proto. */
   AUTH_TRUST_HOST: boolFlag.default(true),
+  /**
+   * Addresses of the reverse proxy in front of the server, comma-separated. Only a request whose
+   * socket peer is one of these may name the client in X-Forwarded-For (read by src/cli/serve.mjs).
+   */
+  /**
+   * The address people reach this server at (e.g. https://book.example.org). Links in e-mail are
+   * built from it; without it they use the address of the request that caused the mail.
+   */
+  PUBLIC_URL: z.url('must be a full URL such as https://book.example.org').optional(),
+  TRUST_PROXY: z.string().regex(/^[0-9a-fA-F:.,\s]*$/, 'must be IP addresses separated by commas').optional(),
+  /** An upload body that sends nothing for this long is answered 408 and its temp file removed. */
+  UPLOAD_IDLE_SECONDS: z.coerce.number({ error: 'must be a number of seconds' }).min(0.1, 'must be at least 0.1 s').max(600, 'must be at most 600 s').default(30),
+  /**
+   * Strict-Transport-Security max-age in seconds; 0 (the default) sends none. Set it only when
+   * the site is reached over https (directly or behind a TLS-terminating proxy).
+   */
+  HSTS_MAX_AGE: z.coerce.number({ error: 'must be a number of seconds' }).int('must be a whole number of seconds').min(0, 'must be 0 or more').max(63_072_000, 'must be at most two years (63072000)').default(0),
 });
 
 export type Config = z.infer<typeof ConfigSchema> & { AUTH_SECRET: string; DATA_DIR: string };

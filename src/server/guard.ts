@@ -1,6 +1,6 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql, type SQL } from 'drizzle-orm';
 import { memberships, venues } from '~/db/schema';
-import { can, refusalMessage, type Action, type Role, type VenueAccess } from '~/lib/permissions';
+import { can, isGuest, isMember, readScope, refusalMessage, type Action, type Guest, type Principal, type Role, type VenueAccess } from '~/lib/permissions';
 import { getDb } from './db';
 import { HttpError } from './http';
 import type { SessionUser } from './session';
@@ -8,11 +8,38 @@ import type { SessionUser } from './session';
 /**
  * The server side of the permission policy, used by every route and page in the same order:
  * who are you (401) → does the venue exist for you (404) → may you (403).
+ *
+ * A guest (guest pass) is never told more than a stranger would be: everything outside the
+ * advance sheet of their venue answers 404, not 401 or 403.
  */
 
-export function requireUser(user: SessionUser | null | undefined): SessionUser {
-  if (!user) throw new HttpError(401, 'Sign in first; this needs an account.');
-  return user;
+/** What middleware puts on `locals`: the member or null, and the guest or null. */
+export type RequestPrincipal = SessionUser | Guest | null | undefined;
+
+const NOTHING_HERE = 'There is nothing at this address.';
+
+export function requireUser(principal: RequestPrincipal): SessionUser {
+  if (isGuest(principal)) throw new HttpError(404, NOTHING_HERE);
+  if (!principal) throw new HttpError(401, 'Sign in first; this needs an account.');
+  return principal as SessionUser;
+}
+
+/**
+ * The rule of readScope() as a SQL condition on a venue-id column: the one filter every list
+ * and search uses, so "which venues may this person read" is decided in one place.
+ */
+export function readableVenueCondition(principal: Principal | undefined, venueIdColumn: SQL | typeof venues.id): SQL {
+  const scope = readScope(principal);
+  switch (scope.kind) {
+    case 'all':
+      return sql`1 = 1`;
+    case 'memberships':
+      return sql`${venueIdColumn} IN (SELECT m.venue_id FROM memberships m WHERE m.user_id = ${scope.userId})`;
+    case 'advance-of':
+    case 'none':
+      // A guest reads the advance sheet through its own route, never through lists or search.
+      return sql`1 = 0`;
+  }
 }
 
 export interface VenueRow {
@@ -20,6 +47,7 @@ export interface VenueRow {
   slug: string;
   name: string;
   town: string | null;
+  checkStaleMonths: number;
 }
 
 export interface VenueContext {
@@ -30,32 +58,52 @@ export interface VenueContext {
 const NOT_FOUND = 'There is no such venue, or you are not a member of it.';
 
 /**
- * The venue as this person may see it. A venue they are not a member of answers exactly like
- * one that does not exist, so a URL never reveals which venues exist.
+ * The venue as this principal may see it. A venue they are not a member of answers exactly like
+ * one that does not exist, so a URL never reveals which venues exist. A guest sees only the
+ * venue of their pass.
  */
-export async function loadVenue(user: SessionUser, venueSlug: string | undefined): Promise<VenueContext> {
+export async function loadVenue(principal: SessionUser | Guest, venueSlug: string | undefined): Promise<VenueContext> {
   if (!venueSlug || venueSlug.length > 100) throw new HttpError(404, NOT_FOUND);
   const db = await getDb();
+  const userId = isMember(principal) ? principal.id : '';
   const rows = await db
-    .select({ id: venues.id, slug: venues.slug, name: venues.name, town: venues.town, role: memberships.role })
+    .select({ id: venues.id, slug: venues.slug, name: venues.name, town: venues.town, checkStaleMonths: venues.checkStaleMonths, role: memberships.role })
     .from(venues)
-    .leftJoin(memberships, and(eq(memberships.venueId, venues.id), eq(memberships.userId, user.id)))
+    .leftJoin(memberships, and(eq(memberships.venueId, venues.id), eq(memberships.userId, userId)))
     .where(eq(venues.slug, venueSlug))
     .limit(1);
   const row = rows[0];
-  if (!row || (!row.role && !user.isAdmin)) throw new HttpError(404, NOT_FOUND);
+  if (!row) throw new HttpError(404, NOT_FOUND);
   const { role, ...venue } = row;
-  return { venue, access: { role: (role as Role | null) ?? null } };
+  if (isGuest(principal)) {
+    if (principal.venueId !== venue.id) throw new HttpError(404, NOT_FOUND);
+    return { venue, access: { role: null, venueId: venue.id } };
+  }
+  if (!role && !principal.isAdmin) throw new HttpError(404, NOT_FOUND);
+  return { venue, access: { role: (role as Role | null) ?? null, venueId: venue.id } };
 }
 
-export function requirePermission(user: SessionUser, action: Action, access?: VenueAccess | null): void {
-  if (!can(user, action, access)) throw new HttpError(403, refusalMessage(action, access));
+export function requirePermission(principal: Principal, action: Action, access?: VenueAccess | null): void {
+  if (can(principal, action, access)) return;
+  if (isGuest(principal)) throw new HttpError(404, NOTHING_HERE);
+  throw new HttpError(403, refusalMessage(action, access));
 }
 
-/** 401 → 404 → 403 in one call, for the common case of a venue-scoped action. */
-export async function guardVenue(user: SessionUser | null | undefined, venueSlug: string | undefined, action: Action): Promise<VenueContext & { user: SessionUser }> {
-  const signedIn = requireUser(user);
+/** 401 → 404 → 403 for a signed-in member's venue-scoped action; guests get 404. */
+export async function guardVenue(principal: RequestPrincipal, venueSlug: string | undefined, action: Action): Promise<VenueContext & { user: SessionUser }> {
+  const signedIn = requireUser(principal);
   const ctx = await loadVenue(signedIn, venueSlug);
   requirePermission(signedIn, action, ctx.access);
   return { ...ctx, user: signedIn };
+}
+
+/**
+ * The one guard that admits guests: reading the advance sheet (and the changes on it) of a
+ * venue, as a member with `advance.read` or as the holder of that venue's pass.
+ */
+export async function guardAdvanceReader(principal: RequestPrincipal, venueSlug: string | undefined): Promise<VenueContext & { principal: SessionUser | Guest }> {
+  if (!principal) throw new HttpError(401, 'Sign in first, or open the guest link you were sent.');
+  const ctx = await loadVenue(principal, venueSlug);
+  requirePermission(principal, 'advance.read', ctx.access);
+  return { ...ctx, principal };
 }

@@ -67,6 +67,22 @@ export function searchParamsObject(url: URL): Record<string, string> {
   return Object.fromEntries(url.searchParams.entries());
 }
 
+const IDEMPOTENCY_KEY = /^[A-Za-z0-9_.:-]{8,100}$/;
+
+/**
+ * The request's `Idempotency-Key` header (the IETF HTTP draft's name), when it has one. A key
+ * that could not have come from a client library (too short, too long, odd characters) is a 400.
+ */
+export function idempotencyKey(request: Request): string | undefined {
+  const raw = request.headers.get('idempotency-key');
+  if (raw === null) return undefined;
+  const key = raw.trim().replace(/^"(.*)"$/, '$1');
+  if (!IDEMPOTENCY_KEY.test(key)) {
+    throw new HttpError(400, 'The Idempotency-Key header must be 8 to 100 letters, digits or "-_.:" (a random UUID is ideal).', 'Idempotency-Key');
+  }
+  return key;
+}
+
 const MAX_JSON_BYTES = 2 * 1024 * 1024;
 
 /**

@@ -1,6 +1,7 @@
 import type { AstroGlobal } from 'astro';
 import type { Action } from '~/lib/permissions';
 import { guardVenue, type VenueContext } from './guard';
+import { noteVisit } from './members';
 import { HttpError } from './http';
 import type { SessionUser } from './session';
 
@@ -14,7 +15,10 @@ export type PageGuardResult =
  */
 export async function guardVenuePage(Astro: AstroGlobal, action: Action): Promise<PageGuardResult> {
   try {
-    return { ok: true, ctx: await guardVenue(Astro.locals.user, Astro.params.venue, action) };
+    const ctx = await guardVenue(Astro.locals.principal, Astro.params.venue, action);
+    if (ctx.access.role) await noteVisit(ctx.venue.id, ctx.user.id);
+    Astro.locals.venueHere = { slug: ctx.venue.slug, access: ctx.access };
+    return { ok: true, ctx };
   } catch (err) {
     return { ok: false, response: errorPageResponse(Astro, err) };
   }

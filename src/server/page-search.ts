@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import { MATCH_CLOSE, MATCH_OPEN, snippetHtml, snippetParts } from '~/lib/doc/marked-snippet';
 import { toFtsQuery } from '~/lib/doc/search-query';
 import { getDb } from './db';
+import { readableVenueCondition } from './guard';
 import type { SessionUser } from './session';
 
 interface HitRow {
@@ -16,6 +17,9 @@ interface HitRow {
   markedBody: string;
 }
 
+/** Most hits one search answers: the results page shows this many, suggestions fewer. */
+export const SEARCH_PAGE_LIMIT = 50;
+
 /** BM25 with a title match counting ten times a body match. */
 const RANKING = 'bm25(10.0, 1.0)';
 const SNIPPET_TOKENS = 14;
@@ -29,7 +33,8 @@ export async function searchPages(user: SessionUser, q: string, limit = 20) {
   const match = toFtsQuery(q);
   if (!match) return [];
   const db = await getDb();
-  const readable = user.isAdmin ? sql`1 = 1` : sql`p.venue_id IN (SELECT m.venue_id FROM memberships m WHERE m.user_id = ${user.id})`;
+  // Archived pages are out of the book, so out of search too.
+  const readable = sql`${readableVenueCondition(user, sql`p.venue_id`)} AND p.archived_at IS NULL`;
   // ORDER BY rank with the ranking given through `rank MATCH` lets FTS5 hand rows over best
   // first, so the joins, the access filter and snippet() run only until the page is full.
   const rows = await db.all<HitRow>(sql`

@@ -7,7 +7,7 @@ import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Reader, type Tx } from './db';
 import type { Action } from '~/lib/permissions';
-import { loadVenue, requirePermission, requireUser } from './guard';
+import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
@@ -19,8 +19,12 @@ const PAGE_NOT_FOUND = 'There is no such page in this venue.';
 /** Page slugs that would be shadowed by a fixed route under /venues/:venue/. */
 export const RESERVED_PAGE_SLUGS = new Set(['new', 'sections', 'files', 'advance', 'members', 'audit', 'settings', 'history', 'edit', 'search', 'changes', 'print']);
 
-/** A page of a venue with its current revision; 404 when the slug is not a page of this venue. */
-export async function loadPageWithCurrent(venueId: string, pageSlug: string | undefined) {
+/**
+ * A page of a venue with its current revision, the document still as its stored JSON text (the
+ * read view renders from a cache keyed by revision and often never needs it parsed); 404 when
+ * the slug is not a page of this venue.
+ */
+export async function loadPageWithCurrentText(venueId: string, pageSlug: string | undefined) {
   if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
   const db = await getDb();
   const rows = await db
@@ -42,10 +46,14 @@ export async function loadPageWithCurrent(venueId: string, pageSlug: string | un
   return {
     page: row.page,
     section: { slug: row.sectionSlug, title: row.sectionTitle },
-    revision: row.revision
-      ? { ...row.revision, doc: JSON.parse(row.revision.doc) as PmNode, authorName: row.authorName ?? FORMER_MEMBER }
-      : null,
+    revision: row.revision ? { ...row.revision, authorName: row.authorName ?? FORMER_MEMBER } : null,
   };
+}
+
+/** A page of a venue with its current revision, document parsed; 404 as above. */
+export async function loadPageWithCurrent(venueId: string, pageSlug: string | undefined) {
+  const { revision, ...rest } = await loadPageWithCurrentText(venueId, pageSlug);
+  return { ...rest, revision: revision ? { ...revision, doc: JSON.parse(revision.doc) as PmNode } : null };
 }
 
 export type LoadedPage = Awaited<ReturnType<typeof loadPageWithCurrent>>;
@@ -136,7 +144,7 @@ export async function createPage(venueId: string, input: PageCreate, actor: Sess
 }
 
 /** 401 → 404 (venue, then page) → 403 for routes about one page. */
-export async function guardPage(user: SessionUser | null | undefined, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
+export async function guardPage(user: RequestPrincipal, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
   const signedIn = requireUser(user);
   const ctx = await loadVenue(signedIn, venueSlug);
   const page = await findPage(ctx.venue.id, pageSlug);

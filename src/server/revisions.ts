@@ -1,4 +1,4 @@
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, lt } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
 import type { PmNode } from '~/lib/doc/types';
 import type { PageSave, RestoreRequest } from '~/lib/schemas/page';
@@ -11,7 +11,9 @@ import { findPage, pageJson, sectionInTx, type PageRow } from './pages';
 import { authorJson, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
 
-const MAX_HISTORY = 1000;
+/** Revisions per history page unless the caller asks for another size (1 to 500). */
+export const HISTORY_PAGE_SIZE = 100;
+export const HISTORY_MAX_PAGE_SIZE = 500;
 
 /** Parses ":n" from a URL; anything that is not a plain positive number is simply not found. */
 export function revisionNumberParam(raw: string | undefined): number {
@@ -47,6 +49,7 @@ async function conflict(tx: Tx, page: PageRow, base: number): Promise<HttpError>
 
 interface Append {
   page: PageRow;
+  idempotencyKey?: string;
   doc: string;
   plainText: string;
   summary: string;
@@ -61,7 +64,7 @@ async function appendRevision(tx: Tx, a: Append) {
   const now = new Date();
   const [revision] = await tx
     .insert(revisions)
-    .values({ pageId: a.page.id, number, doc: a.doc, plainText: a.plainText, summary: a.summary, authorId: a.actor.id, restoredFrom: a.restoredFrom ?? null, createdAt: now })
+    .values({ pageId: a.page.id, number, doc: a.doc, plainText: a.plainText, summary: a.summary, authorId: a.actor.id, restoredFrom: a.restoredFrom ?? null, idempotencyKey: a.idempotencyKey ?? null, createdAt: now })
     .returning();
   const [page] = await tx
     .update(pages)
@@ -73,16 +76,47 @@ async function appendRevision(tx: Tx, a: Append) {
   return { revision, page };
 }
 
+/** The answer of a save: the page as it now is and the revision the save made. */
+async function saveAnswer(tx: Tx, page: PageRow, revision: typeof revisions.$inferSelect, author: { id: string | null; name: string | null }) {
+  const [sec] = await tx.select({ slug: sections.slug, title: sections.title }).from(sections).where(eq(sections.id, page.sectionId));
+  return { page: pageJson(page, sec), revision: revisionJson(revision, authorJson(author.id, author.name)) };
+}
+
+/**
+ * A save retried with the Idempotency-Key of one that already landed (its answer lost to a
+ * dropped connection) gets that save's answer again instead of a 409 against itself. The key
+ * belongs to one person and one text: anything else reusing it is refused.
+ */
+async function replayed(tx: Tx, page: PageRow, key: string, doc: string, actor: SessionUser) {
+  const [row] = await tx
+    .select({ revision: revisions, authorName: users.name })
+    .from(revisions)
+    .leftJoin(users, eq(users.id, revisions.authorId))
+    .where(and(eq(revisions.pageId, page.id), eq(revisions.idempotencyKey, key)))
+    .limit(1);
+  if (!row) return null;
+  if (row.revision.authorId !== actor.id || row.revision.doc !== doc) {
+    throw new HttpError(422, 'This Idempotency-Key was already used for a different save; send a new key with each new save.');
+  }
+  return saveAnswer(tx, page, row.revision, { id: row.revision.authorId, name: row.authorName });
+}
+
 /**
  * Saves a new revision when `baseRevision` is still the current one: read, compare, insert,
  * point the page at it, index it and audit it, all in ONE write transaction. Under any burst of
- * saves on the same base exactly one succeeds; the others get a 409 carrying the winner.
+ * saves on the same base exactly one succeeds; the others get a 409 carrying the winner. A save
+ * with an `idempotencyKey` that already landed answers as it did the first time.
  */
-export async function saveRevision(venueId: string, pageSlug: string | undefined, input: PageSave, actor: SessionUser) {
+export async function saveRevision(venueId: string, pageSlug: string | undefined, input: PageSave, actor: SessionUser, idempotencyKey?: string) {
   const { doc, plainText } = checkDocOrThrow(input.doc);
+  const docText = JSON.stringify(doc);
   const summary = input.summary ?? '';
   return writeTx(async (tx) => {
     const current = await findPage(venueId, pageSlug, tx);
+    if (idempotencyKey) {
+      const earlier = await replayed(tx, current, idempotencyKey, docText, actor);
+      if (earlier) return earlier;
+    }
     // A document pointing at another venue's file, or at none, is bad input whatever the base.
     await assertOwnFileRefs(tx, venueId, doc);
     if (current.currentRevision !== input.baseRevision) throw await conflict(tx, current, input.baseRevision);
@@ -91,7 +125,8 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
     const sectionChanged = section !== null && section.id !== current.sectionId;
     const { revision, page } = await appendRevision(tx, {
       page: current,
-      doc: JSON.stringify(doc),
+      idempotencyKey,
+      doc: docText,
       plainText,
       summary,
       actor,
@@ -112,8 +147,7 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
         ...(sectionChanged ? { section: section.slug } : {}),
       },
     });
-    const [sec] = await tx.select({ slug: sections.slug, title: sections.title }).from(sections).where(eq(sections.id, page.sectionId));
-    return { page: pageJson(page, sec), revision: revisionJson(revision, authorJson(actor.id, actor.name)) };
+    return saveAnswer(tx, page, revision, actor);
   });
 }
 
@@ -140,17 +174,27 @@ export async function restoreRevision(venueId: string, pageSlug: string | undefi
   });
 }
 
-/** The history of a page, newest first, without the documents. */
-export async function listRevisions(pageId: string) {
+/**
+ * One page of a page's history, newest first, without the documents: the revisions numbered
+ * below `before` (all when unset). `nextBefore` is where the next, older page starts, or null
+ * when revision 1 is on this one, so no revision is ever out of reach of the list.
+ */
+export async function listRevisions(pageId: string, opts: { before?: number; limit?: number } = {}) {
+  const limit = opts.limit ?? HISTORY_PAGE_SIZE;
   const db = await getDb();
   const rows = await db
     .select({ revision: revisions, authorName: users.name })
     .from(revisions)
     .leftJoin(users, eq(users.id, revisions.authorId))
-    .where(eq(revisions.pageId, pageId))
+    .where(opts.before === undefined ? eq(revisions.pageId, pageId) : and(eq(revisions.pageId, pageId), lt(revisions.number, opts.before)))
     .orderBy(desc(revisions.number))
-    .limit(MAX_HISTORY);
-  return rows.map((r) => revisionJson(r.revision, authorJson(r.revision.authorId, r.authorName)));
+    .limit(limit + 1);
+  const more = rows.length > limit;
+  const shown = more ? rows.slice(0, limit) : rows;
+  return {
+    revisions: shown.map((r) => revisionJson(r.revision, authorJson(r.revision.authorId, r.authorName))),
+    nextBefore: more ? shown[shown.length - 1].revision.number : null,
+  };
 }
 
 /** One revision with its document and plain text; 404 when the page has no such number. */

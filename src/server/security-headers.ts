@@ -1,24 +1,10 @@
+import { hstsFromEnv, securityHeaders as policyHeaders } from './security-policy.mjs';
+
+export { completePagePolicy } from './security-policy.mjs';
+
 /**
- * Everything the app needs is served by the app itself (fonts included), so the policy can
- * refuse every other host. Inline scripts stay allowed because Astro hydrates islands with them.
+ * The headers every response carries (the values live in security-policy.mjs, shared with the
+ * build's script hashing and the HTTP front). A page's own content-security-policy, which Astro
+ * writes with the hashes of its scripts, is kept; so is any header a route set itself.
  */
-export const securityHeaders: Record<string, string> = {
-  'content-security-policy': [
-    "default-src 'self'",
-    "script-src 'self' 'unsafe-inline'",
-    "style-src 'self' 'unsafe-inline'",
-    "img-src 'self' data: blob:",
-    "font-src 'self'",
-    "connect-src 'self'",
-    "media-src 'self' blob:",
-    "worker-src 'self'",
-    "object-src 'none'",
-    "base-uri 'self'",
-    "form-action 'self'",
-    "frame-ancestors 'none'",
-  ].join('; '),
-  'x-content-type-options': 'nosniff',
-  'referrer-policy': 'same-origin',
-  'x-frame-options': 'DENY',
-  'permissions-policy': 'camera=(), geolocation=(), microphone=()',
-};
+export const securityHeaders: Record<string, string> = policyHeaders(hstsFromEnv(process.env));

@@ -1,10 +1,11 @@
-import { asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import { memberships, pages, sections, venues } from '~/db/schema';
 import type { VenueCreate } from '~/lib/schemas/venue';
 import { DEFAULT_SECTIONS } from '~/lib/default-sections';
 import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx } from './db';
+import { readableVenueCondition } from './guard';
 import { HttpError } from './http';
 import type { SessionUser } from './session';
 
@@ -18,12 +19,13 @@ export async function listVenuesFor(user: SessionUser) {
       name: venues.name,
       town: venues.town,
       role: memberships.role,
-      pageCount: sql<number>`(select count(*) from ${pages} where ${pages.venueId} = ${venues.id})`,
+      pageCount: sql<number>`(select count(*) from ${pages} where ${pages.venueId} = ${venues.id} and ${pages.archivedAt} is null)`,
     })
     .from(venues)
     .leftJoin(memberships, sql`${memberships.venueId} = ${venues.id} and ${memberships.userId} = ${user.id}`)
+    .where(readableVenueCondition(user, venues.id))
     .orderBy(asc(venues.name));
-  return rows.filter((r) => user.isAdmin || r.role);
+  return rows;
 }
 
 export async function createVenue(input: VenueCreate, actor: SessionUser) {
@@ -60,6 +62,6 @@ export async function listPages(venueId: string) {
     })
     .from(pages)
     .innerJoin(sections, eq(sections.id, pages.sectionId))
-    .where(eq(pages.venueId, venueId))
+    .where(and(eq(pages.venueId, venueId), isNull(pages.archivedAt)))
     .orderBy(asc(sections.position), asc(pages.title));
 }

@@ -76,6 +76,7 @@ function signedInScreens(): [string, ((page: Page) => Promise<unknown>) | undefi
     [`/venues/${venue}/files`, (p) => p.waitForLoadState('networkidle')],
     [`/venues/${venue}/sections`, undefined],
     [`/venues/${venue}/new`, (p) => p.getByTestId('editor').waitFor()],
+    ['/search?q=stage', undefined],
     ['/admin/outbox', undefined],
   ];
 }

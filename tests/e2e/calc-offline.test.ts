@@ -70,7 +70,9 @@ it('works with no network after one visit', async () => {
   await page.waitForSelector('[data-offline-status="ready"]', { timeout: 60_000 });
   await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
   const list = (await (await fetch(`${url}/calc/offline-pages.json`)).json()) as { pages: string[] };
-  expect(list.pages).toEqual(expect.arrayContaining(['/calc', '/calc/bandwidth', '/calc/spl', '/calc/delay', '/calc/response', '/calc/signal', '/calc/guide/delay']));
+  expect(list.pages).toEqual(
+    expect.arrayContaining(['/calc', '/calc/bandwidth', '/calc/spl', '/calc/delay', '/calc/response', '/calc/signal', '/calc/guide/delay', '/calc/levels', '/calc/waves', '/calc/dose', '/calc/guide/levels-and-loads', '/calc/guide/wavelength-and-air', '/calc/guide/show-dose']),
+  );
   const saved = await page.evaluate(async () => {
     const names = await caches.keys();
     const keys: string[] = [];
@@ -88,7 +90,7 @@ it('works with no network after one visit', async () => {
   serverStopped = true;
 
   await page.reload();
-  expect(await page.getByTestId('calculator-list').getByRole('listitem').count()).toBe(5);
+  expect(await page.getByTestId('calculator-list').getByRole('listitem').count()).toBe(8);
   await page.getByRole('link', { name: /Delay and alignment/ }).first().click();
   await page.waitForURL(/\/calc\/delay/);
   await hydrated(page);
@@ -110,6 +112,20 @@ it('works with no network after one visit', async () => {
   await hydrated(page);
   await page.getByTestId('width-q').fill('4.318');
   await expect.poll(() => page.getByTestId('width-oct-result').innerText()).toMatch(/^0\.333/);
+
+  // The second-round screens, offline, from links with their own state.
+  await page.goto(`${url}/calc/levels?sens=100&power=1000&mdist=32&unit=m&boxes=1&sref=1W`);
+  await hydrated(page);
+  // 100 dB + 10·log10(1000) − 20·log10(32) = 99.90 dB.
+  await expect.poll(() => page.getByTestId('maxspl-level').innerText()).toMatch(/^99\.9/);
+  await page.goto(`${url}/calc/waves?cmode=time&cms=1`);
+  await hydrated(page);
+  await expect.poll(() => page.getByTestId('comb-nulls').innerText()).toMatch(/500, 1\.5k, 2\.5k/);
+  await page.goto(`${url}/calc/dose?seg=88:4`);
+  await hydrated(page);
+  await expect.poll(() => page.getByTestId('dose-niosh-value').innerText()).toMatch(/^100\.0 %/);
+  await page.goto(`${url}/calc/guide/show-dose`);
+  expect(await page.getByRole('heading', { name: 'Average level' }).isVisible()).toBe(true);
 
   await page.goto(`${url}/calc/guide/sound-level`);
   expect(await page.getByRole('heading', { name: 'Daily exposure' }).isVisible()).toBe(true);

@@ -180,7 +180,7 @@ describe('the index', () => {
   it('lists every calculator with its guide, and nothing left 127.0.0.1', async () => {
     const page = await browser.context.newPage();
     await page.goto(`${server.url}/calc`);
-    expect(await page.getByTestId('calculator-list').getByRole('listitem').count()).toBe(5);
+    expect(await page.getByTestId('calculator-list').getByRole('listitem').count()).toBe(8);
     await page.getByRole('link', { name: /Filter response/ }).click();
     await page.waitForURL(/\/calc\/response/);
     await page.close();

@@ -73,7 +73,7 @@ describe('photos from the files screen into a page', () => {
     await page.getByRole('heading', { name: 'Photos and files', level: 1 }).waitFor();
 
     const input = page.getByTestId('file-input');
-    expect(await input.getAttribute('accept')).toBe('image/*,application/pdf');
+    expect(await input.getAttribute('accept')).toBe('image/*,application/pdf,text/plain,text/csv,.txt,.csv,.tsv');
     expect(await input.getAttribute('multiple')).not.toBeNull();
     await input.setInputFiles(photos);
     const rows = page.getByTestId('upload-row');

@@ -145,22 +145,58 @@ describe('editing a page, a conflict, history and restore', () => {
   });
 });
 
-describe('the header search on a phone', () => {
-  it('finds a page as you type, moves with the arrow keys, opens with Enter', async () => {
-    const page = await open(DEMO.viewer, { width: 390, height: 844 });
+describe('search', () => {
+  it('on a laptop: suggestions from three letters, fetched only once the field is focused; arrows and Enter open a page', async () => {
+    const page = await open(DEMO.viewer);
+    const scripts: string[] = [];
+    page.on('request', (r) => {
+      if (r.resourceType() === 'script') scripts.push(r.url());
+    });
     await page.goto(`${server.url}/venues`);
-    await page.getByRole('button', { name: 'Search pages' }).click();
-    await page.getByTestId('search-input').fill('balcony fills');
+    const input = page.getByTestId('search-input');
+    await page.waitForLoadState('networkidle');
+    const beforeFocus = scripts.length;
+    await input.click();
+    await expect.poll(() => scripts.length).toBeGreaterThan(beforeFocus);
+    await input.pressSequentially('ba');
+    expect(await page.getByTestId('search-results').getByRole('option').count()).toBe(0);
+    await input.pressSequentially('lcony fills');
     const first = page.getByTestId('search-results').getByRole('option').first();
     await first.waitFor();
     expect(await first.locator('mark').count()).toBeGreaterThan(0);
+    // No link inside an option: the option itself is what is chosen.
+    expect(await page.getByTestId('search-results').locator('a').count()).toBe(0);
     await page.keyboard.press('ArrowDown');
     expect(await first.getAttribute('aria-selected')).toBe('true');
+    expect(await input.getAttribute('aria-activedescendant')).toBe(await first.getAttribute('id'));
     await Promise.all([page.waitForURL(/\/venues\/[a-z0-9-]+\/[a-z0-9-]+$/), page.keyboard.press('Enter')]);
+    expect(await page.getByTestId('page-body').innerText()).toMatch(/balcony fills/i);
+  });
+
+  it('Enter with nothing chosen opens the results page', async () => {
+    const page = await open(DEMO.viewer);
+    await page.goto(`${server.url}/venues`);
+    await page.getByTestId('search-input').fill('balcony');
+    await Promise.all([page.waitForURL(/\/search\?q=balcony$/), page.getByTestId('search-input').press('Enter')]);
+    expect(await page.getByTestId('search-hits').locator('li').count()).toBeGreaterThan(0);
+    expect(await page.getByTestId('search-page-input').inputValue()).toBe('balcony');
+  });
+
+  it('on a phone: the search icon leads to the results page, which works without any script', async () => {
+    const page = await open(DEMO.viewer, { width: 390, height: 844 });
+    await page.goto(`${server.url}/venues`);
+    await Promise.all([page.waitForURL(/\/search$/), page.getByRole('link', { name: 'Search pages' }).click()]);
+    await page.getByTestId('search-page-input').fill('balcony fills');
+    await Promise.all([page.waitForURL(/\/search\?q=/), page.getByTestId('search-page-input').press('Enter')]);
+    const first = page.getByTestId('search-hits').locator('li a').first();
+    expect(await page.getByTestId('search-hits').locator('mark').count()).toBeGreaterThan(0);
+    await Promise.all([page.waitForURL(/\/venues\/[a-z0-9-]+\/[a-z0-9-]+$/), first.click()]);
     expect(await page.getByTestId('page-body').innerText()).toMatch(/balcony fills/i);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(391);
   });
+});
 
+describe('on a phone', () => {
   it('the editor fits a phone screen', async () => {
     const page = await open(DEMO.engineer, { width: 390, height: 844 });
     await page.goto(`${server.url}/venues/${venue}/${slug}/edit`);

@@ -2,11 +2,13 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { copyFileSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
-import { SERVER_ENTRY } from '~/cli/build-if-stale.mjs';
+import { SERVE_SCRIPT } from '~/cli/build-if-stale.mjs';
 import { ROOT, TEMPLATE_DB, TMP_ROOT } from './paths';
 
 export interface TestServer {
   url: string;
+  /** The process started (with WEB_CONCURRENCY > 1, the primary of its worker processes). */
+  pid: number;
   authSecret: string;
   dir: string;
   dbPath: string;
@@ -41,7 +43,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
   copyFileSync(TEMPLATE_DB, dbPath);
   const port = await freePort();
   let log = '';
-  const child: ChildProcess = spawn(process.execPath, [SERVER_ENTRY], {
+  const child: ChildProcess = spawn(process.execPath, [SERVE_SCRIPT], {
     cwd: ROOT,
     env: {
       ...process.env,
@@ -51,7 +53,6 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
       UPLOADS_DIR: uploadsDir,
       AUTH_SECRET: TEST_AUTH_SECRET,
       SEED_DEMO: '0',
-      NODE_ENV: 'production',
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -73,6 +74,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Tes
   }
   return {
     url,
+    pid: child.pid!,
     authSecret: env.AUTH_SECRET ?? TEST_AUTH_SECRET,
     dir,
     dbPath,

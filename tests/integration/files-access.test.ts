@@ -202,7 +202,7 @@ describe('the files screen and the list', () => {
     expect(viewerHtml).not.toContain('data-testid="delete-file"');
     const engineerHtml = await (await as.engineer.fetch(`/venues/${venue}/files`)).text();
     expect(engineerHtml).toContain('data-testid="uploader"');
-    expect(engineerHtml).toContain('accept="image/*,application/pdf"');
+    expect(engineerHtml).toContain('accept="image/*,application/pdf,text/plain,text/csv,.txt,.csv,.tsv"');
     expect(engineerHtml).toContain('data-testid="delete-file"');
   });
 

@@ -4,7 +4,7 @@ import { copyFileSync, mkdirSync, mkdtempSync, readdirSync, rmSync, statfsSync }
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { SERVER_ENTRY } from '~/cli/build-if-stale.mjs';
+import { SERVE_SCRIPT } from '~/cli/build-if-stale.mjs';
 import { DEMO, ROOT, TEMPLATE_DB, TMP_ROOT } from '../helpers/paths';
 import { freePort } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
@@ -72,7 +72,7 @@ describe.skipIf(refusal !== null)('a full disk', () => {
       env: {
         ...process.env,
         NODE_BIN: process.execPath,
-        ENTRY: SERVER_ENTRY,
+        ENTRY: SERVE_SCRIPT,
         HOST: '127.0.0.1',
         PORT: String(port),
         DATABASE_URL: `file:${dbPath}`,

@@ -139,3 +139,66 @@ describe('GET /api/search', () => {
     });
   });
 });
+
+describe('short prefixes', () => {
+  it('one or two letters match whole words only, never every word that starts with them', async () => {
+    // "z" and "ze" would prefix-match "zebrafinch"; as whole words no page says either.
+    expect((await search(as.engineer, 'z')).hits).toEqual([]);
+    expect((await search(as.engineer, 'ze')).hits).toEqual([]);
+    expect((await search(as.engineer, 'zeb')).hits.map((h) => h.page.title)).toContain('Zebrafinch spares');
+  });
+});
+
+describe('GET /search, the results page', () => {
+  const page = async (who: Client, q: string) => {
+    const res = await who.fetch(`/search?q=${encodeURIComponent(q)}`);
+    return { status: res.status, html: await res.text(), location: res.headers.get('location') };
+  };
+
+  it('sends a signed-out person to sign in, and back here after', async () => {
+    const res = await anonymous(server.url).fetch('/search?q=quokkaphone', { redirect: 'manual' });
+    expect(res.status).toBe(303);
+    expect(res.headers.get('location')).toBe(`/signin?next=${encodeURIComponent('/search?q=quokkaphone')}`);
+  });
+
+  it('lists every readable match server-rendered, with the venue named and matches marked as text', async () => {
+    const { status, html } = await page(as.viewer, 'quokkaphone');
+    expect(status).toBe(200);
+    expect(html).toContain('data-testid="search-hits"');
+    expect(html).toMatch(/<mark[^>]*>Quokkaphone<\/mark>/);
+    expect(html).toContain(`href="/venues/${mainVenue}/`);
+    expect(html).toContain('&lt;img src=x onerror=alert(1');
+    expect(html).not.toContain('<img src=x');
+    expect(html).toMatch(/2 pages/);
+    // The query is echoed into both fields, escaped.
+    expect(html).toContain('value="quokkaphone"');
+  });
+
+  it('never lists another venue’s page', async () => {
+    const { html } = await page(as.viewer, 'zebrafinch');
+    expect(html).not.toContain('Secret annex');
+    expect(html).toMatch(/Zebrafinch<\/mark> spares/);
+    const admin = await page(as.admin, 'zebrafinch');
+    expect(admin.html).toContain('Secret annex');
+  });
+
+  it('asks for three letters rather than searching one or two', async () => {
+    const { status, html } = await page(as.viewer, 'qu');
+    expect(status).toBe(200);
+    expect(html).toMatch(/Type 3 letters or more/);
+    expect(html).not.toContain('Quokkaphone patch</a>');
+  });
+
+  it.each(['"><script>alert(1)</script>', "' OR 1=1--", 'x'.repeat(500), '\u0002mark\u0003'])('%j: a page, never a 500, nothing unescaped', async (q) => {
+    const { status, html } = await page(as.viewer, q);
+    expect(status).toBe(200);
+    // Echoed only inside the fields' value attributes, with the quote escaped.
+    expect(html).not.toContain('"><script>alert(1)');
+  });
+
+  it('the header carries a plain search form to this page, and no React for it', async () => {
+    const { html } = await page(as.viewer, 'quokkaphone');
+    expect(html).toMatch(/<form action="\/search" method="get" role="search"/);
+    expect(html).not.toContain('astro-island');
+  });
+});

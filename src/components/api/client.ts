@@ -47,6 +47,10 @@ export interface RequestOptions {
   fallback?: Fallback;
   /** What to say when the server is not reached (offline, DNS, cancelled). */
   unreachable?: string;
+  /** Extra request headers (e.g. Idempotency-Key). */
+  headers?: Record<string, string>;
+  /** Try once more at once when the server was not reached: only safe for idempotent requests. */
+  retryUnreachable?: boolean;
 }
 
 /**
@@ -56,11 +60,15 @@ export interface RequestOptions {
  */
 export async function request<T>(url: string, options: RequestOptions = {}): Promise<T> {
   const { method = 'GET', body, signal } = options;
-  const headers: Record<string, string> = { accept: 'application/json' };
+  const headers: Record<string, string> = { accept: 'application/json', ...options.headers };
   if (body !== undefined) headers['content-type'] = 'application/json';
+  const init: RequestInit = { method, headers, body: body === undefined ? undefined : JSON.stringify(body), credentials: 'same-origin', signal };
   let res: Response;
   try {
-    res = await fetch(url, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), credentials: 'same-origin', signal });
+    res = await fetch(url, init).catch((err: unknown) => {
+      if (!options.retryUnreachable || signal?.aborted) throw err;
+      return fetch(url, init);
+    });
   } catch {
     throw new ApiError(UNREACHABLE, options.unreachable ?? UNREACHABLE_SENTENCE);
   }

@@ -34,8 +34,22 @@ export function pageApi(venue: string, page: string): string {
   return `${venueApi(venue)}/pages/${encodeURIComponent(page)}`;
 }
 
+let lastSave: { fingerprint: string; key: string } | null = null;
+
+/**
+ * One key per save attempt: pressing Save again with the same text on the same base after a lost
+ * answer sends the same key, so a save that had landed answers with its revision, not a 409.
+ */
+function idempotencyKeyFor(fingerprint: string): string {
+  if (lastSave?.fingerprint !== fingerprint) lastSave = { fingerprint, key: crypto.randomUUID() };
+  return lastSave.key;
+}
+
 export function savePage(venue: string, page: string, body: { doc: PmNode; baseRevision: number; summary: string; title?: string; section?: string }) {
-  return save(() => request<PageSaved>(pageApi(venue, page), { method: 'PUT', body, fallback, unreachable: OFFLINE }), venue);
+  const url = pageApi(venue, page);
+  // With a key a retry is safe whether or not the first attempt landed: try once more at once.
+  const headers = { 'idempotency-key': idempotencyKeyFor(url + JSON.stringify(body)) };
+  return save(() => request<PageSaved>(url, { method: 'PUT', body, fallback, unreachable: OFFLINE, headers, retryUnreachable: true }), venue);
 }
 
 export function createPage(venue: string, body: { doc: PmNode; title: string; section: string; summary: string }) {

@@ -4,9 +4,9 @@ import { pageApi } from './pages';
 
 export type { HistoryAnswer, RevisionAnswer };
 
-/** SWR key of a page's history (GET, newest first). */
-export function historyKey(venue: string, page: string): string {
-  return `${pageApi(venue, page)}/revisions`;
+/** SWR key of a page's history (GET, newest first), from below revision `before` when given. */
+export function historyKey(venue: string, page: string, before?: number | null): string {
+  return `${pageApi(venue, page)}/revisions${before ? `?before=${before}` : ''}`;
 }
 
 /** SWR key of one revision with its text. */

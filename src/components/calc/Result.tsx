@@ -1,17 +1,29 @@
 import type { ReactNode } from 'react';
 import type { Outcome } from './attempt';
+import CopyLink from './CopyLink';
 
 interface Props<T> {
   outcome: Outcome<T>;
   children: (value: T) => ReactNode;
   testId?: string;
+  /** Offer "copy link" under the answer (off for small results that share one panel's link). */
+  share?: boolean;
 }
 
 /** The answer area: the result when the inputs make sense, otherwise the reason in plain words. */
-export default function Result<T>({ outcome, children, testId }: Props<T>) {
+export default function Result<T>({ outcome, children, testId, share = true }: Props<T>) {
   return (
     <div data-testid={testId} aria-live="polite" className="rounded-lg bg-sunken p-3">
-      {outcome.ok ? children(outcome.value) : <p className="text-base text-warn" role="status">{outcome.message}</p>}
+      {outcome.ok ? (
+        <>
+          {children(outcome.value)}
+          {share && <CopyLink />}
+        </>
+      ) : (
+        <p className="text-base text-warn" role="status">
+          {outcome.message}
+        </p>
+      )}
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import { parseDecimal } from '~/lib/schemas/decimal';
+import { parseDecimal, parseDecimalOrFraction } from '~/lib/schemas/decimal';
 
 export type Outcome<T> = { ok: true; value: T } | { ok: false; message: string };
 
@@ -6,10 +6,10 @@ export type Outcome<T> = { ok: true; value: T } | { ok: false; message: string }
 class InputProblem extends RangeError {}
 
 /** The number in a typed field, or an InputProblem naming the field. Accepts a decimal comma. */
-export function num(text: string | undefined, label: string): number {
-  const n = parseDecimal(text ?? '', true);
+export function num(text: string | undefined, label: string, allowFraction = false): number {
+  const n = allowFraction ? parseDecimalOrFraction(text ?? '', true) : parseDecimal(text ?? '', true);
   if (n === 'empty') throw new InputProblem(`Enter ${label}.`);
-  if (n === 'syntax') throw new InputProblem(`${label[0].toUpperCase()}${label.slice(1)} must be a number, like 12.5.`);
+  if (n === 'syntax') throw new InputProblem(`${label[0].toUpperCase()}${label.slice(1)} must be a number, like ${allowFraction ? '0.5 or 1/3' : '12.5'}.`);
   if (n === 'infinite') throw new InputProblem(`${label[0].toUpperCase()}${label.slice(1)} is too large.`);
   return n;
 }

@@ -1,4 +1,4 @@
-import { METERS_PER_FOOT } from '~/lib/acoustics';
+import { lengthFromMeters, lengthToMeters, temperatureFromCelsius, temperatureToCelsius } from '~/lib/acoustics';
 import { parseDecimal } from '~/lib/schemas/decimal';
 
 /** Rewrites a typed value into another unit; text that is not a number yet is left alone. */
@@ -8,10 +8,11 @@ export function convertText(text: string, convert: (value: number) => number, di
   return String(Number(convert(n).toFixed(digits)));
 }
 
-export const lengthTo = (unit: string) => (value: number) => (unit === 'ft' ? value / METERS_PER_FOOT : value * METERS_PER_FOOT);
-export const temperatureTo = (unit: string) => (value: number) => (unit === 'F' ? (value * 9) / 5 + 32 : ((value - 32) * 5) / 9);
-export const toMeters = (value: number, unit: string) => (unit === 'ft' ? value * METERS_PER_FOOT : value);
-export const fromMeters = (meters: number, unit: string) => (unit === 'ft' ? meters / METERS_PER_FOOT : meters);
+/** The field's value in the new unit: typed in the other unit, converted through the one unit module. */
+export const lengthTo = (unit: string) => (value: number) => (unit === 'ft' ? lengthFromMeters(value, 'ft') : lengthToMeters(value, 'ft'));
+export const temperatureTo = (unit: string) => (value: number) => (unit === 'F' ? temperatureFromCelsius(value, 'F') : temperatureToCelsius(value, 'F'));
+export const toMeters = lengthToMeters;
+export const fromMeters = lengthFromMeters;
 
 export const SAMPLE_RATES = [
   { value: '44100', label: '44.1 kHz' },

@@ -4,6 +4,7 @@ import { ApiError, fetcher } from '~/components/api/client';
 import { historyKey, restoreRevision, type HistoryAnswer } from '~/components/api/revisions';
 import { DiffView } from './DiffView';
 import { RevisionList } from './RevisionList';
+import { useOlderRevisions } from './use-older-revisions';
 
 export interface HistoryViewProps {
   venue: string;
@@ -11,14 +12,17 @@ export interface HistoryViewProps {
   mayRestore: boolean;
   /** The list as the server rendered it, shown until SWR has fetched a fresh one. */
   initial: HistoryAnswer;
+  /** The history page the server rendered starts below this revision (null: the newest). */
+  before?: number | null;
 }
 
 type Message = { kind: 'ok' | 'error'; text: string } | null;
 
 /** A page's history: pick two revisions, read the word-level diff, restore an old one. */
-export default function HistoryView({ venue, page, mayRestore, initial }: HistoryViewProps) {
-  const { data, error, mutate } = useSWR<HistoryAnswer, ApiError>(historyKey(venue, page), fetcher, { fallbackData: initial });
-  const revisions = data?.revisions ?? [];
+export default function HistoryView({ venue, page, mayRestore, initial, before = null }: HistoryViewProps) {
+  const { data, error, mutate } = useSWR<HistoryAnswer, ApiError>(historyKey(venue, page, before), fetcher, { fallbackData: initial });
+  const older = useOlderRevisions(venue, page, data?.nextBefore ?? null);
+  const revisions = older.after(data?.revisions ?? []);
   const current = data?.page.currentRevision ?? 0;
   const [pair, setPair] = useState<{ older: number; newer: number } | null>(current > 1 ? { older: current - 1, newer: current } : null);
   const [restoring, setRestoring] = useState<number | null>(null);
@@ -98,6 +102,7 @@ export default function HistoryView({ venue, page, mayRestore, initial }: Histor
           restoring={restoring}
           onCompare={(older, newer) => setPair({ older, newer })}
           onRestore={restore}
+          older={older}
         />
       </section>
     </div>

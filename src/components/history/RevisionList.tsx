@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { formatDateTime } from '~/lib/format-date';
 import type { RevisionSummary } from '~/lib/api-types';
+import type { OlderRevisions } from './use-older-revisions';
 
 interface Props {
   revisions: RevisionSummary[];
@@ -9,12 +10,17 @@ interface Props {
   restoring: number | null;
   onCompare: (older: number, newer: number) => void;
   onRestore: (n: number) => void;
+  older: OlderRevisions;
 }
 
-/** Every revision, newest first, with compare and (for those who may edit) restore. */
-export function RevisionList({ revisions, current, mayRestore, restoring, onCompare, onRestore }: Props) {
+/**
+ * The revisions loaded so far, newest first, with compare and (for those who may edit) restore,
+ * and a button for the next older page until revision 1 is shown.
+ */
+export function RevisionList({ revisions, current, mayRestore, restoring, onCompare, onRestore, older }: Props) {
   const [confirming, setConfirming] = useState<number | null>(null);
   return (
+    <>
     <ol className="divide-y divide-line rounded-lg border border-line bg-surface" data-testid="revision-list">
       {revisions.map((r) => (
         <li key={r.number} className="flex flex-wrap items-center gap-x-4 gap-y-2 p-3" data-testid={`revision-${r.number}`}>
@@ -64,5 +70,18 @@ export function RevisionList({ revisions, current, mayRestore, restoring, onComp
         </li>
       ))}
     </ol>
+    {older.error && <p className="mt-2 text-danger">{older.error}</p>}
+    {older.nextBefore !== null && (
+      <button
+        type="button"
+        className="mt-3 min-h-11 rounded-md border border-line px-3 text-sm hover:bg-sunken disabled:opacity-50"
+        disabled={older.loading}
+        onClick={older.loadMore}
+        data-testid="older-revisions"
+      >
+        {older.loading ? 'Loading older revisions…' : 'Older revisions'}
+      </button>
+    )}
+    </>
   );
 }

@@ -3,3 +3,4 @@ export * from './venues';
 export * from './pages';
 export * from './files';
 export * from './audit';
+export * from './people';

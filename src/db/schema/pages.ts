@@ -16,6 +16,13 @@ export const pages = sqliteTable(
     slug: text('slug').notNull(),
     title: text('title').notNull(),
     inAdvance: integer('in_advance', { mode: 'boolean' }).notNull().default(false),
+    /** Order on the advance sheet (lowest first); meaningful only while inAdvance. */
+    advancePosition: integer('advance_position').notNull().default(0),
+    /** "Checked on site": who confirmed the page against the room, and when. No revision. */
+    checkedAt: integer('checked_at', { mode: 'timestamp_ms' }),
+    checkedBy: text('checked_by').references(() => users.id, { onDelete: 'set null' }),
+    /** Hidden from the book and the advance sheet, history kept; null while live. */
+    archivedAt: integer('archived_at', { mode: 'timestamp_ms' }),
     /** Number of the revision readers see; the compare-and-set on save checks this column. */
     currentRevision: integer('current_revision').notNull().default(0),
     createdAt: createdAt(),
@@ -41,7 +48,9 @@ export const revisions = sqliteTable(
     authorId: text('author_id').references(() => users.id, { onDelete: 'set null' }),
     /** Set when this revision was made by restoring an older one. */
     restoredFrom: integer('restored_from'),
+    /** The save's Idempotency-Key header, so a retry of a save that landed finds its revision. */
+    idempotencyKey: text('idempotency_key'),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('revisions_page_number_idx').on(t.pageId, t.number)],
+  (t) => [uniqueIndex('revisions_page_number_idx').on(t.pageId, t.number), uniqueIndex('revisions_page_idempotency_idx').on(t.pageId, t.idempotencyKey)],
 );

@@ -7,6 +7,11 @@ export const users = sqliteTable('users', {
   name: text('name').notNull(),
   passwordHash: text('password_hash'),
   isAdmin: integer('is_admin', { mode: 'boolean' }).notNull().default(false),
+  /**
+   * Sessions carry the epoch they were issued under; raising it (sign-out, password change,
+   * removal, "sign out everywhere") ends every open session of this person at the next request.
+   */
+  sessionEpoch: integer('session_epoch').notNull().default(0),
   createdAt: createdAt(),
 });
 

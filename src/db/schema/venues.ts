@@ -8,6 +8,8 @@ export const venues = sqliteTable('venues', {
   slug: text('slug').notNull().unique(),
   name: text('name').notNull(),
   town: text('town'),
+  /** Power and rigging pages warn on the advance sheet when their last on-site check is older. */
+  checkStaleMonths: integer('check_stale_months').notNull().default(6),
   createdAt: createdAt(),
 });
 
@@ -22,6 +24,10 @@ export const memberships = sqliteTable(
       .references(() => users.id, { onDelete: 'cascade' }),
     // Exactly the roles the permission policy knows.
     role: text('role', { enum: ROLES }).notNull(),
+    /** The previous visit's start, kept for "changed since your last visit". */
+    lastVisitAt: integer('last_visit_at', { mode: 'timestamp_ms' }),
+    /** The time this visit began; moved to lastVisitAt when a new visit starts. */
+    visitStartedAt: integer('visit_started_at', { mode: 'timestamp_ms' }),
     createdAt: createdAt(),
   },
   (t) => [primaryKey({ columns: [t.venueId, t.userId] }), index('memberships_user_idx').on(t.userId)],

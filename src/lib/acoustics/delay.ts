@@ -13,20 +13,20 @@ function requireSampleRate(value: unknown): number {
 
 /**
  * Time sound takes to travel `distanceMeters` through air, ms: t = d / c(T) × 1000.
- * Source: definition of speed; c(T) from `speedOfSound` (ideal gas, Kinsler et al.).
+ * Source: definition of speed; c(T) from `speedOfSound` (ideal gas, Kinsler et al.; with humidity, Cramer 1993).
  */
-export function delayMs(distanceMeters: number, temperatureCelsius = 20): number {
+export function delayMs(distanceMeters: number, temperatureCelsius = 20, relativeHumidityPercent?: number): number {
   const d = requireDistance(distanceMeters);
-  return (d / speedOfSound(temperatureCelsius)) * 1000;
+  return (d / speedOfSound(temperatureCelsius, relativeHumidityPercent)) * 1000;
 }
 
 /**
  * Distance sound travels through air in `ms` milliseconds, m: d = c(T) × t / 1000.
  * Source: as for `delayMs`.
  */
-export function distanceFromMs(ms: number, temperatureCelsius = 20): number {
+export function distanceFromMs(ms: number, temperatureCelsius = 20, relativeHumidityPercent?: number): number {
   const t = requireInRange(ms, LIMITS.delayMs, 'The time', 'ms');
-  return (speedOfSound(temperatureCelsius) * t) / 1000;
+  return (speedOfSound(temperatureCelsius, relativeHumidityPercent) * t) / 1000;
 }
 
 /**

@@ -1,6 +1,6 @@
 /** How a level changes with distance in the free field. */
 import { LIMITS } from './limits';
-import { requireInRange, requireOneOf } from './guards';
+import { formatNumber, requireInRange, requireOneOf } from './guards';
 
 export type SourceGeometry = 'point' | 'line';
 
@@ -33,5 +33,12 @@ export function levelAtDistance(
   const geometry = requireOneOf(source, ['point', 'line'] as const, 'The source type');
   // Difference of logs, not log of the ratio: the ratio of a tiny and a large distance overflows.
   const changeDb = -(geometry === 'point' ? 20 : 10) * (Math.log10(to) - Math.log10(from));
-  return { levelDb: level + changeDb, changeDb };
+  const levelAt = level + changeDb;
+  // A valid pair of distances can still put the answer outside any level a meter reads (1e−320 m to 20 m).
+  if (levelAt < LIMITS.levelDb.min || levelAt > LIMITS.levelDb.max) {
+    throw new RangeError(
+      `At that distance the level would be ${formatNumber(levelAt)} dB, outside ${LIMITS.levelDb.min} to ${LIMITS.levelDb.max} dB where this estimate means anything; check both distances and their unit.`,
+    );
+  }
+  return { levelDb: levelAt, changeDb };
 }

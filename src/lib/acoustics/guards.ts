@@ -10,7 +10,9 @@ export function formatNumber(value: unknown): string {
   if (typeof value !== 'number') return value === undefined ? 'nothing' : `"${String(value)}"`;
   if (Number.isNaN(value)) return 'not a number';
   if (!Number.isFinite(value)) return value > 0 ? 'infinity' : 'minus infinity';
-  return String(Number(value.toPrecision(6)));
+  // 12 significant digits: enough that a bound never rounds onto a typed value next to it
+  // (6561.67979 ft, not 6561.68), few enough to hide binary float noise.
+  return String(Number(value.toPrecision(12)));
 }
 
 function withUnit(value: string, unit: string): string {

@@ -33,6 +33,36 @@ export const LIMITS = {
   phaseDeg: { min: -360, max: 360 },
   /** Concert pitch: baroque 415 Hz to a bright orchestra at 446 Hz, with margin. */
   a4Hz: { min: 400, max: 480 },
+  /** Relative humidity of air. */
+  relativeHumidityPercent: { min: 0, max: 100 },
+  /** A measured phase difference, which may be unwrapped over several cycles. */
+  measuredPhaseDeg: { min: -36_000, max: 36_000 },
+  /** Latency of a fill's path (wireless link, extra processor) beyond the main's, ms. */
+  latencyMs: { min: 0, max: 1_000 },
+  /** One loudspeaker's nominal impedance, Ω. */
+  loadOhms: { min: 0.5, max: 1_000 },
+  /** Most boxes on one amplifier channel or in one array calculation. */
+  maxBoxes: 64,
+  /** Amplifier power per box, W. */
+  powerWatts: { min: 0.001, max: 100_000 },
+  /** Loudspeaker sensitivity, dB SPL at 1 m. */
+  sensitivityDb: { min: 50, max: 130 },
+  /** Signal levels for dBu / dBV / dBFS conversions, dB. */
+  signalDb: { min: -200, max: 100 },
+  /** Volts for the signal-level conversion. */
+  volts: { min: 1e-9, max: 10_000 },
+  /** Power for the signal-level conversion, W. */
+  watts: { min: 1e-12, max: 100_000 },
+  /** A console's full scale, dBu (0 dBFS = this many dBu). */
+  fullScaleDbu: { min: -20, max: 40 },
+  /** Hours in one exposure segment (a day at most). */
+  segmentHours: { min: 0, max: 24 },
+  /** Most segments in one dose. */
+  maxSegments: 48,
+  /** Most readings in one Leq. */
+  maxReadings: 2_000,
+  /** Most nulls or peaks one comb answer lists. */
+  maxCombFrequencies: 500,
   /** Most levels one sum accepts. */
   maxLevels: 64,
   /** Most filters one cascade accepts. */

@@ -64,3 +64,20 @@ export function coherentSum(levelsDb: number[], phasesDeg?: number[]): number {
   const relativeDb = 20 * Math.log10(Math.hypot(re, im));
   return loudest + Math.max(relativeDb, -COHERENT_CANCELLATION_FLOOR_DB);
 }
+
+export interface CoherentTotal {
+  /** The total, dB, floored at COHERENT_CANCELLATION_FLOOR_DB below the loudest source. */
+  totalDb: number;
+  /** The sources cancel completely (deeper than the floor): a null, not a level. */
+  isNull: boolean;
+}
+
+/**
+ * `coherentSum` that says when the answer is a null: two equal sources 180° apart cancel completely,
+ * which is not "120 dB below the loudest" but no sound at all at this frequency (a comb-filter null).
+ */
+export function coherentTotal(levelsDb: number[], phasesDeg?: number[]): CoherentTotal {
+  const totalDb = coherentSum(levelsDb, phasesDeg);
+  const loudest = Math.max(...levelsDb);
+  return { totalDb, isNull: totalDb <= loudest - COHERENT_CANCELLATION_FLOOR_DB + 1e-9 };
+}

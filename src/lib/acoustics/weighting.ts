@@ -1,6 +1,7 @@
 /** Frequency weightings A, C and Z of sound level meters. */
 import { LIMITS } from './limits';
 import { requireInRange, requireOneOf } from './guards';
+import { NOMINAL_THIRD_OCTAVE_HZ, exactMidbandHz } from './octave-bands';
 
 /** Pole frequencies of the weighting networks, Hz (IEC 61672-1:2013 Annex E, E.2–E.3). */
 export const WEIGHTING_POLES_HZ = {
@@ -54,3 +55,25 @@ export function weightingDb(curve: WeightingCurve, frequencyHz: number): number 
   const which = requireOneOf(curve, ['A', 'C', 'Z'] as const, 'The weighting');
   return which === 'A' ? aWeightingDb(frequencyHz) : which === 'C' ? cWeightingDb(frequencyHz) : zWeightingDb(frequencyHz);
 }
+
+export interface TabulatedFrequency {
+  /** The frequency the weighting is computed at, Hz. */
+  frequencyHz: number;
+  /** The nominal band frequency typed, when it was snapped to its exact base-10 value. */
+  nominalHz?: number;
+}
+
+/**
+ * IEC 61672-1 Table 3 lists nominal one-third-octave frequencies (16 Hz, 31.5 Hz…) but computes each
+ * entry at the exact base-10 midband frequency 1000·10^(x/10) Hz (IEC 61260-1:2014 §5.2 / Table 3
+ * footnote; from memory). A typed nominal frequency is snapped to that exact one, so 16 Hz answers the
+ * table's −56.7 dB (at 15.849 Hz) rather than −56.4 dB; any other frequency is used as typed.
+ */
+export function tabulatedFrequency(frequencyHz: number): TabulatedFrequency {
+  const f = requireFrequency(frequencyHz);
+  const i = NOMINAL_THIRD_OCTAVE_HZ.findIndex((nominal) => Math.abs(nominal - f) < 1e-9 * nominal);
+  if (i < 0) return { frequencyHz: f };
+  const exact = exactMidbandHz(Math.round(10 * Math.log10(f / 1000)), 3);
+  return Math.abs(exact - f) < 1e-12 * f ? { frequencyHz: f } : { frequencyHz: exact, nominalHz: f };
+}
+

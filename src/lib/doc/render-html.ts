@@ -1,6 +1,6 @@
 import { NODE_ATTR_RULES } from './attr-rules';
 import { escapeHtml } from './escape-html';
-import { isOwnFileUrl, isSafeLinkHref } from './safe-url';
+import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
 import { blockPlainText, processorBlockRenderers } from './render-blocks';
 
@@ -24,6 +24,11 @@ export interface RenderOptions {
    * as a short note instead of a broken image.
    */
   isImageAvailable?: (src: string) => boolean;
+  /**
+   * Where the reader fetches an image of this instance from. A guest has no session, so the
+   * guest view points images at its own pass-scoped file route instead of /files/….
+   */
+  imageUrl?: (src: string) => string;
 }
 
 const SIMPLE_BLOCKS: Record<string, string> = {
@@ -91,11 +96,13 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
         break;
       case 'link': {
         const href = mark.attrs?.href;
-        if (isSafeLinkHref(href)) {
-          const external = /^https?:/i.test(href);
+        const kind = linkKind(href);
+        if (kind) {
+          // Only web links open a new tab; mailto: and tel: hand over to another program anyway.
+          const external = kind === 'external' && /^https?:/i.test((href as string).trim());
           const title = mark.attrs?.title;
           const titled = typeof title === 'string' && title && title.length <= 500 ? attr('title', title) : '';
-          html = `<a${external ? EXTERNAL_LINK : ''}${attr('href', href)}${titled}>${html}</a>`;
+          html = `<a${external ? EXTERNAL_LINK : ''}${attr('href', href as string)}${titled}>${html}</a>`;
         }
         break;
       }
@@ -185,7 +192,7 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
       const width = accepted(node, 'width');
       const height = accepted(node, 'height');
       const size = `${width ? attr('width', width as number) : ''}${height ? attr('height', height as number) : ''}`;
-      return [`<img${attr('src', src)}${attr('alt', alt)}${title ? attr('title', title) : ''}${size} loading="lazy"/>`, ''];
+      return [`<img${attr('src', options.imageUrl ? options.imageUrl(src) : src)}${attr('alt', alt)}${title ? attr('title', title) : ''}${size} loading="lazy"/>`, ''];
     }
     default:
       // Unknown nodes keep their text but lose their markup.

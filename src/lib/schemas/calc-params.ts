@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { rangeMessage } from '~/lib/acoustics/guards';
-import { MAX_NUMBER_CHARS, parseDecimal, type NumberProblem } from './decimal';
+import { MAX_NUMBER_CHARS, parseDecimal, parseDecimalOrFraction, type NumberProblem } from './decimal';
 
 export { MAX_NUMBER_CHARS, parseDecimal, type NumberProblem };
 
@@ -26,16 +26,17 @@ export function numberProblemMessage(problem: NumberProblem, name: string, what:
  * A required query-string number: present, decimal, finite. Its physical range is checked by the
  * object schema, because the range depends on the unit chosen beside it (m/ft, °C/°F).
  */
-export function numberParam(name: string, what: string, example: string) {
+export function numberParam(name: string, what: string, example: string, allowFraction = false) {
   return z
     .string({
       error: (issue) =>
         issue.input === undefined ? `Give ${name} (${what}), e.g. ${name}=${example}.` : `${name} must be a number such as ${example}.`,
     })
     .transform((raw, ctx) => {
-      const n = parseDecimal(raw);
+      const n = allowFraction ? parseDecimalOrFraction(raw) : parseDecimal(raw);
       if (typeof n === 'number') return n;
-      ctx.issues.push({ code: 'custom', message: numberProblemMessage(n, name, what, example, raw), input: raw });
+      const message = numberProblemMessage(n, name, what, example, raw);
+      ctx.issues.push({ code: 'custom', message: allowFraction && n === 'syntax' ? message.replace(/\(([^)]*)\)/, '($1, or a fraction like 1/3)') : message, input: raw });
       return z.NEVER;
     });
 }

@@ -4,31 +4,13 @@
  * and each refusal is a sentence naming the parameter, its unit and an example that works.
  */
 import { z } from 'zod';
-import { LIMITS, METERS_PER_FOOT, octavesFromQ, type BandInput, type BandFraction } from '~/lib/acoustics';
+import { LIMITS, octavesFromQ, type BandInput, type BandFraction } from '~/lib/acoustics';
 import { checkRange, choiceParam, numberListParam, numberParam, shown, type Bounds } from './calc-params';
+import { HUMIDITY_HINT, distanceBounds, humidityParam, tempUnitParam, temperatureBounds, temperatureParam, toCelsius, toMeters, unitParam } from './calc-common';
 export { ResponseBodySchema, type ResponseBody } from './calc-response';
+export * from './calc-second';
 
 const optional = <T extends z.ZodType>(schema: T) => schema.optional();
-
-/** Feet are converted to metres before the range check; the message speaks the unit the person used. */
-function distanceBounds(unit: 'm' | 'ft', minExclusive = false): Bounds {
-  const scale = unit === 'ft' ? 1 / METERS_PER_FOOT : 1;
-  return { min: LIMITS.distanceMeters.min * scale, max: LIMITS.distanceMeters.max * scale, minExclusive };
-}
-
-const toMeters = (value: number, unit: 'm' | 'ft') => (unit === 'ft' ? value * METERS_PER_FOOT : value);
-
-/** Air temperature limits in the unit given; °F bounds are the °C ones converted. */
-function temperatureBounds(unit: 'C' | 'F'): Bounds {
-  const { min, max } = LIMITS.temperatureCelsius;
-  return unit === 'F' ? { min: (min * 9) / 5 + 32, max: (max * 9) / 5 + 32 } : { min, max };
-}
-
-const toCelsius = (value: number, unit: 'C' | 'F') => (unit === 'F' ? ((value - 32) * 5) / 9 : value);
-
-const unitParam = choiceParam('unit', ['m', 'ft']).default('m');
-const tempUnitParam = choiceParam('tempUnit', ['C', 'F'], 'upper').default('C');
-const temperatureParam = numberParam('temp', 'the air temperature', '20');
 
 // ---------------------------------------------------------------------------------------------
 
@@ -41,7 +23,7 @@ export const OCTAVES_BOUNDS: Bounds = {
 export const BandQuerySchema = z
   .object({
     q: optional(numberParam('q', 'the quality factor Q', '1.41')),
-    octaves: optional(numberParam('octaves', 'the bandwidth in octaves', '1')),
+    octaves: optional(numberParam('octaves', 'the bandwidth in octaves', '1', true)),
     f0: optional(numberParam('f0', 'the centre frequency in Hz', '1000')),
     low: optional(numberParam('low', 'the lower −3 dB frequency in Hz', '707')),
     high: optional(numberParam('high', 'the upper −3 dB frequency in Hz', '1414')),
@@ -193,10 +175,10 @@ export const WeightingQuerySchema = z
 export const ExposureQuerySchema = z
   .object({
     level: numberParam('level', 'the A-weighted level in dBA', '94'),
-    standard: choiceParam('standard', ['niosh', 'osha']),
+    standard: choiceParam('standard', ['niosh', 'osha', 'eu']),
   })
   .transform((v, ctx) =>
-    checkRange(ctx, v.level, LIMITS.exposureLevelDba, 'level', 'dBA', 'Below 70 dBA neither rule sets a daily limit; above 140 dB any exposure risks immediate harm.')
+    checkRange(ctx, v.level, LIMITS.exposureLevelDba, 'level', 'dBA', 'Below 70 dBA no rule here sets a daily limit; above 140 dB any exposure risks immediate harm.')
       ? v
       : z.NEVER,
   );
@@ -208,12 +190,14 @@ export const DelayQuerySchema = z
     temp: optional(temperatureParam),
     tempUnit: tempUnitParam,
     rate: optional(numberParam('rate', 'the sample rate in Hz', '48000')),
+    rh: optional(humidityParam),
   })
   .transform((v, ctx) => {
     const temp = v.temp ?? (v.tempUnit === 'F' ? 68 : 20);
     if (!checkRange(ctx, v.distance, distanceBounds(v.unit), 'distance', v.unit, 'Measure distances as positive numbers.')) return z.NEVER;
     if (!checkRange(ctx, temp, temperatureBounds(v.tempUnit), 'temp', `°${v.tempUnit}`, 'Enter the air temperature where the audience is.')) return z.NEVER;
     if (v.rate !== undefined && !checkRange(ctx, v.rate, LIMITS.sampleRateHz, 'rate', 'Hz', 'Common rates are 44100, 48000 and 96000 Hz.')) return z.NEVER;
+    if (v.rh !== undefined && !checkRange(ctx, v.rh, LIMITS.relativeHumidityPercent, 'rh', '%', HUMIDITY_HINT)) return z.NEVER;
     return { ...v, temp, distanceMeters: toMeters(v.distance, v.unit), temperatureCelsius: toCelsius(temp, v.tempUnit) };
   });
 
@@ -225,6 +209,8 @@ export const AlignQuerySchema = z
     temp: optional(temperatureParam),
     tempUnit: tempUnitParam,
     offset: optional(numberParam('offset', 'the precedence offset in ms', '5')),
+    latency: optional(numberParam('latency', 'how many ms later the fill’s signal path is', '0')),
+    rh: optional(humidityParam),
   })
   .transform((v, ctx) => {
     const temp = v.temp ?? (v.tempUnit === 'F' ? 68 : 20);
@@ -233,7 +219,10 @@ export const AlignQuerySchema = z
     if (!checkRange(ctx, v.main, distanceBounds(v.unit), 'main', v.unit, hint) || !checkRange(ctx, v.fill, distanceBounds(v.unit), 'fill', v.unit, hint)) return z.NEVER;
     if (!checkRange(ctx, temp, temperatureBounds(v.tempUnit), 'temp', `°${v.tempUnit}`)) return z.NEVER;
     if (!checkRange(ctx, offset, LIMITS.precedenceOffsetMs, 'offset', 'ms', '5–10 ms is common practice.')) return z.NEVER;
-    return { ...v, temp, offset, mainMeters: toMeters(v.main, v.unit), fillMeters: toMeters(v.fill, v.unit), temperatureCelsius: toCelsius(temp, v.tempUnit) };
+    const latency = v.latency ?? 0;
+    if (!checkRange(ctx, latency, LIMITS.latencyMs, 'latency', 'ms', 'Give the extra latency of the fill’s path (wireless link, extra processor), or 0.')) return z.NEVER;
+    if (v.rh !== undefined && !checkRange(ctx, v.rh, LIMITS.relativeHumidityPercent, 'rh', '%', HUMIDITY_HINT)) return z.NEVER;
+    return { ...v, temp, offset, latency, mainMeters: toMeters(v.main, v.unit), fillMeters: toMeters(v.fill, v.unit), temperatureCelsius: toCelsius(temp, v.tempUnit) };
   });
 
 export type BandQuery = z.infer<typeof BandQuerySchema>;

@@ -24,3 +24,16 @@ export function parseDecimal(raw: string, decimalComma = false): number | Number
   const n = Number(text);
   return Number.isFinite(n) ? n : 'infinite';
 }
+
+/** "1/3", " 2 / 3 ": a simple fraction of two plain decimals, as widths are written in the trade. */
+const FRACTION = /^\s*([+]?(?:\d+(?:\.\d*)?|\.\d+))\s*\/\s*((?:\d+(?:\.\d*)?|\.\d+))\s*$/;
+
+/** `parseDecimal`, but also a fraction such as 1/3 or 2/3 (a zero denominator is a syntax problem). */
+export function parseDecimalOrFraction(raw: string, decimalComma = false): number | NumberProblem {
+  const match = raw.length <= 2 * MAX_NUMBER_CHARS + 1 ? FRACTION.exec(decimalComma ? raw.replace(/,/g, '.') : raw) : null;
+  if (!match) return parseDecimal(raw, decimalComma);
+  const denominator = Number(match[2]);
+  if (!(denominator > 0)) return 'syntax';
+  const n = Number(match[1]) / denominator;
+  return Number.isFinite(n) ? n : 'infinite';
+}

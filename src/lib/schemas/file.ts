@@ -1,12 +1,10 @@
 import { z } from 'zod';
 import { MAX_CAPTION_CHARS } from '~/lib/upload-limits';
+import { displayText } from './display-text';
 
 export { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES, UPLOAD_ACCEPT } from '~/lib/upload-limits';
 
-const caption = z
-  .string({ error: 'The caption must be text.' })
-  .trim()
-  .max(MAX_CAPTION_CHARS, `Keep the caption under ${MAX_CAPTION_CHARS} characters.`);
+const caption = displayText('the caption', { max: MAX_CAPTION_CHARS });
 
 /** The text fields that travel beside the file in a multipart upload. */
 export const FileUploadFieldsSchema = z.object({

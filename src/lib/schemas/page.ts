@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { SLUG_PATTERN } from '~/lib/slug';
 import { PAGE_TITLE_MAX, SEARCH_MAX_LENGTH, SECTION_TITLE_MAX, SLUG_MAX, SUMMARY_MAX } from '~/lib/text-limits';
+import { displayText } from './display-text';
 
 export { SEARCH_MAX_LENGTH };
 
@@ -22,17 +23,12 @@ function strictBody<T extends z.core.$ZodLooseShape>(shape: T) {
   });
 }
 
-const title = z
-  .string({ error: 'Give the page a title (text).' })
-  .trim()
-  .min(1, 'Give the page a title.')
-  .max(PAGE_TITLE_MAX, `Keep the title under ${PAGE_TITLE_MAX} characters.`);
+const title = displayText('the title', { min: 1, max: PAGE_TITLE_MAX, minMessage: 'Give the page a title.' });
 
 const summary = z
   .string({ error: 'The summary must be text.' })
-  .trim()
-  .max(SUMMARY_MAX, `Keep the summary to one line (under ${SUMMARY_MAX} characters).`)
-  .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.');
+  .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.')
+  .pipe(displayText('the summary', { max: SUMMARY_MAX, maxMessage: `Keep the summary to one line (under ${SUMMARY_MAX} characters).` }));
 
 const sectionSlug = z
   .string({ error: 'Choose a section.' })
@@ -87,11 +83,7 @@ export const SearchQuerySchema = z.object({
     .optional(),
 });
 
-const sectionTitle = z
-  .string({ error: 'Give the section a title (text).' })
-  .trim()
-  .min(1, 'Give the section a title.')
-  .max(SECTION_TITLE_MAX, `Keep the section title under ${SECTION_TITLE_MAX} characters.`);
+const sectionTitle = displayText('the section title', { min: 1, max: SECTION_TITLE_MAX, minMessage: 'Give the section a title.' });
 
 export const SectionCreateSchema = strictBody({
   title: sectionTitle,
@@ -108,3 +100,19 @@ export const SectionUpdateSchema = strictBody({
   move: z.enum(['up', 'down'], { error: 'move is "up" or "down".' }).optional(),
 }).refine((v) => v.title !== undefined || v.move !== undefined, 'Send a new title or a move ("up" or "down").');
 export type SectionUpdate = z.infer<typeof SectionUpdateSchema>;
+
+/** Paging of a page's history: `before` a revision number, `limit` revisions per page. */
+export const HistoryQuerySchema = z.object({
+  before: z.coerce
+    .number({ error: 'before must be a revision number.' })
+    .int('before must be a whole revision number.')
+    .min(2, 'before must be a revision number of 2 or more (revision 1 has nothing older).')
+    .max(1_000_000_000, 'before is past any revision number.')
+    .optional(),
+  limit: z.coerce
+    .number({ error: 'limit must be a number.' })
+    .int('limit must be a whole number.')
+    .min(1, 'limit must be at least 1.')
+    .max(500, 'limit may be at most 500.')
+    .optional(),
+});

@@ -8,7 +8,7 @@ import { searchPages } from '~/server/page-search';
 /** Hits across the pages this person may read: venue, page, section and a marked snippet. */
 export const GET: APIRoute = ({ locals, url }) =>
   handle(async () => {
-    const user = requireUser(locals.user);
+    const user = requireUser(locals.principal);
     const { q, limit } = parseWith(SearchQuerySchema, searchParamsObject(url));
     const hits = await searchPages(user, q, limit);
     return json<SearchAnswer<Date>>({ q, hits });

@@ -10,7 +10,7 @@ export const CredentialsSchema = z.object({
 });
 
 /** The account for these credentials, or null; unknown e-mails cost the same time as wrong passwords. */
-export async function verifyCredentials(input: unknown): Promise<{ id: string; email: string; name: string } | null> {
+export async function verifyCredentials(input: unknown): Promise<{ id: string; email: string; name: string; sessionEpoch: number } | null> {
   const parsed = CredentialsSchema.safeParse(input);
   if (!parsed.success) return null;
   const { email, password } = parsed.data;
@@ -21,5 +21,5 @@ export async function verifyCredentials(input: unknown): Promise<{ id: string; e
     return null;
   }
   if (!(await verifyPassword(user.passwordHash, password))) return null;
-  return { id: user.id, email: user.email, name: user.name };
+  return { id: user.id, email: user.email, name: user.name, sessionEpoch: user.sessionEpoch };
 }

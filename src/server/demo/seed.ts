@@ -1,14 +1,20 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from '~/db/client';
-import { memberships, pages, revisions, sections, users, venues } from '~/db/schema';
+import { auditEvents, guestPasses, memberships, pages, revisions, sections, users, venues } from '~/db/schema';
 import { demoPeople, demoVenues } from './seed-data';
 import { docPlainText } from '~/lib/doc/render-html';
 import { hashPassword } from '~/server/auth/password';
+import { newSecretToken, tokenHash } from '~/server/secret-token';
 
 export interface SeedResult {
   seeded: boolean;
   accounts: { email: string; role: string }[];
+  /** The demo guest pass's link (path only); printed once on first seed, never stored. */
+  guestLink?: string;
 }
+
+/** Days ago each demo page was last checked on site; a power page past six months shows the warning. */
+const CHECKED_DAYS_AGO: Record<string, number> = { 'power-distribution': 240, 'rigging-points': 45 };
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
@@ -21,6 +27,7 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
   if (count > 0) return { seeded: false, accounts: [] };
 
   const hash = await hashPassword(password);
+  const guestToken = newSecretToken();
   await db.transaction(async (tx) => {
     const ids: Record<string, string> = {};
     for (const [key, person] of Object.entries(demoPeople)) {
@@ -54,8 +61,10 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
         sectionIds[s.slug] = row.id;
       }
 
+      let advancePosition = 0;
       for (const p of v.pages) {
         const last = p.revisions[p.revisions.length - 1];
+        const checkedDays = CHECKED_DAYS_AGO[p.slug] ?? (p.section === 'power' || p.section === 'rigging' ? 30 : undefined);
         const [page] = await tx
           .insert(pages)
           .values({
@@ -64,6 +73,9 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
             slug: p.slug,
             title: p.title,
             inAdvance: p.inAdvance,
+            advancePosition: p.inAdvance ? advancePosition++ : 0,
+            checkedAt: checkedDays === undefined ? null : new Date(now - checkedDays * DAY_MS),
+            checkedBy: checkedDays === undefined ? null : ids.engineer,
             currentRevision: p.revisions.length,
             createdAt: new Date(now - p.revisions[0].daysAgo * DAY_MS),
             updatedAt: new Date(now - last.daysAgo * DAY_MS),
@@ -80,12 +92,40 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
             createdAt: new Date(now - r.daysAgo * DAY_MS + i * 60_000),
           })),
         );
+        // The audit log tells the same story as the history.
+        await tx.insert(auditEvents).values(
+          p.revisions.map((r, i) => ({
+            venueId: venue.id,
+            actorId: ids[r.author] ?? ids.manager,
+            action: i === 0 ? 'page.create' : 'page.save',
+            targetType: 'page',
+            targetId: page.id,
+            detail: { slug: p.slug, revision: i + 1, summary: r.summary },
+            createdAt: new Date(now - r.daysAgo * DAY_MS + i * 60_000),
+          })),
+        );
+      }
+      if (index === 0) {
+        await tx.insert(auditEvents).values([
+          { venueId: venue.id, actorId: ids.manager, action: 'member.role', targetType: 'member', targetId: ids.viewer, detail: { email: demoPeople.viewer.email, from: 'engineer', to: 'viewer' }, createdAt: new Date(now - 20 * DAY_MS) },
+          { venueId: venue.id, actorId: ids.manager, action: 'pass.create', targetType: 'pass', targetId: null, detail: { label: 'The Lantern Choir — Friday show' }, createdAt: new Date(now - DAY_MS) },
+        ]);
+        // A pass for an invented touring act, running to the end of the day after tomorrow's show.
+        await tx.insert(guestPasses).values({
+          venueId: venue.id,
+          label: 'The Lantern Choir — Friday show',
+          tokenHash: tokenHash(guestToken),
+          expiresAt: new Date(now + 3 * DAY_MS),
+          createdBy: ids.manager,
+          createdAt: new Date(now - DAY_MS),
+        });
       }
     }
   });
 
   return {
     seeded: true,
+    guestLink: `/advance/${guestToken}`,
     accounts: [
       { email: demoPeople.admin.email, role: 'instance admin' },
       { email: demoPeople.manager.email, role: `manager of both demo venues` },

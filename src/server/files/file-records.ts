@@ -90,12 +90,12 @@ export async function updateCaption(venueId: string, fileId: string | undefined,
 /**
  * Deletes a file's row and, when no other row shares the same content, its bytes. A file a
  * page still shows is only deleted when the caller confirms; otherwise 409 names the pages.
- * The bytes go inside the write transaction, so no upload of the same content can slip in
- * between the reference check and the removal.
+ * The bytes go only after the row's removal has committed: a crash before the commit keeps row
+ * and bytes together, a crash after it leaves bytes no row names, which the start-up sweep removes.
  */
 export async function deleteFile(venueId: string, fileId: string | undefined, actor: SessionUser, confirmed: boolean): Promise<{ usedBy: PageRef[] }> {
   await ensureStorageReady();
-  return writeTx(async (tx) => {
+  const { usedBy, names } = await writeTx(async (tx) => {
     const row = await lockedRow(tx, venueId, fileId);
     const usedBy = (await fileUsage(tx, venueId)).get(row.id) ?? [];
     if (usedBy.length && !confirmed) {
@@ -111,8 +111,21 @@ export async function deleteFile(venueId: string, fileId: string | undefined, ac
       targetId: row.id,
       detail: { name: row.originalName, caption: row.caption, mime: row.mime, usedBy: usedBy.map((p) => p.slug) },
     });
-    for (const name of [row.storageName, row.displayName, row.thumbName]) {
-      if (!name) continue;
+    return { usedBy, names: [row.storageName, row.displayName, row.thumbName].filter((n): n is string => !!n) };
+  });
+  await removeUnreferenced(names);
+  return { usedBy };
+}
+
+/**
+ * Removes stored bytes no row names. It runs as its own turn of the write queue because uploads
+ * publish their bytes inside theirs: an upload of the same content cannot slip in between the
+ * check and the removal. Nothing here writes to the database, so a crash loses nothing.
+ */
+async function removeUnreferenced(names: string[]): Promise<void> {
+  if (!names.length) return;
+  await writeTx(async (tx) => {
+    for (const name of names) {
       const [shared] = await tx
         .select({ id: files.id })
         .from(files)
@@ -120,6 +133,5 @@ export async function deleteFile(venueId: string, fileId: string | undefined, ac
         .limit(1);
       if (!shared) await rm(storedPath(name), { force: true });
     }
-    return { usedBy };
   });
 }

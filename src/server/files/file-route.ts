@@ -11,7 +11,7 @@ export function serveFileRoute({ locals, params, request, url, redirect }: APICo
     return Promise.resolve(redirect(`/signin?next=${encodeURIComponent(url.pathname + url.search)}`, 303));
   }
   return handle(async () => {
-    const row = await loadReadableFile(locals.user, params.id);
+    const row = await loadReadableFile(locals.principal, params.id);
     return fileResponse(row, parseVariant(variant), request, url.searchParams.get('download') === '1');
   });
 }

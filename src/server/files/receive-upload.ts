@@ -5,6 +5,7 @@ import { mkdir, rm } from 'node:fs/promises';
 import { Transform, type Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { MAX_CAPTION_CHARS, MAX_UPLOAD_BYTES } from '~/lib/schemas/file';
+import { getConfig } from '~/server/config';
 import { HttpError } from '~/server/http';
 import { asStorageError } from './storage-errors';
 import { newTempPath, tempDir } from './storage-paths';
@@ -38,6 +39,22 @@ interface FilePart {
 export const tooLarge = () =>
   new HttpError(413, `The file is larger than ${MAX_UPLOAD_BYTES / 1024 / 1024} MiB. Send a smaller file (for a photo: a smaller size from the phone's share menu).`, 'file');
 
+const stalled = (seconds: number) =>
+  new HttpError(408, `The upload stopped sending for ${seconds} s; check the connection and upload the file again.`, 'file');
+
+/** One read of the body, or a 408 when the client sends nothing for `idleMs`. */
+async function readWithin(reader: ReadableStreamDefaultReader<Uint8Array>, idleMs: number) {
+  let timer: NodeJS.Timeout | undefined;
+  const idle = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => reject(stalled(idleMs / 1000)), idleMs);
+  });
+  try {
+    return await Promise.race([reader.read(), idle]);
+  } finally {
+    clearTimeout(timer);
+  }
+}
+
 const interrupted = () => new HttpError(400, 'The upload stopped before it finished; upload the file again.', 'file');
 
 function drainInBackground(reader: ReadableStreamDefaultReader<Uint8Array>): void {
@@ -59,10 +76,11 @@ function drainInBackground(reader: ReadableStreamDefaultReader<Uint8Array>): voi
 /**
  * Streams a multipart body into a temp file with a hard cap, hashing as it goes. Refuses
  * (413) before reading when the declared length is too big and while reading otherwise, so a
- * chunked body without a length cannot get past the cap either. On any failure the temp file
- * is gone before this throws.
+ * chunked body without a length cannot get past the cap either. A sender that goes quiet for
+ * `idleMs` gets a 408 instead of holding a connection and a temp file. On any failure the temp
+ * file is gone before this throws.
  */
-export async function receiveUpload(request: Request): Promise<ReceivedUpload> {
+export async function receiveUpload(request: Request, idleMs = getConfig().UPLOAD_IDLE_SECONDS * 1000): Promise<ReceivedUpload> {
   const contentType = request.headers.get('content-type') ?? '';
   if (!/^multipart\/form-data\b/i.test(contentType)) {
     throw new HttpError(415, 'Send the file as multipart/form-data, in a field named "file".', 'file');
@@ -79,7 +97,8 @@ export async function receiveUpload(request: Request): Promise<ReceivedUpload> {
     bb = busboy({
       headers: { 'content-type': contentType },
       defParamCharset: 'utf8',
-      limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 6, parts: 8, fieldSize: MAX_CAPTION_CHARS * 4 + 64, fieldNameSize: 100 },
+      // Busboy reports its limit on reaching it, so one byte more tells "exactly the cap" from "over".
+      limits: { fileSize: MAX_UPLOAD_BYTES + 1, files: 1, fields: 6, parts: 8, fieldSize: MAX_CAPTION_CHARS * 4 + 64, fieldNameSize: 100 },
     });
   } catch {
     throw new HttpError(400, 'The upload has no multipart boundary; let the browser set the Content-Type header.', 'file');
@@ -139,9 +158,10 @@ export async function receiveUpload(request: Request): Promise<ReceivedUpload> {
   const reader = request.body.getReader();
   let total = 0;
   let ended = false;
+  let timedOut = false;
   try {
     while (!failure) {
-      const { done, value } = await reader.read();
+      const { done, value } = await readWithin(reader, idleMs);
       if (done) {
         ended = true;
         bb.end();
@@ -153,8 +173,9 @@ export async function receiveUpload(request: Request): Promise<ReceivedUpload> {
     }
     if (!failure) await Promise.race([closed, failed]);
     if (!failure && state.file) await state.file.done.catch(() => undefined);
-  } catch {
-    fail(interrupted());
+  } catch (err) {
+    timedOut = err instanceof HttpError && err.status === 408;
+    fail(timedOut ? err : interrupted());
   }
 
   const received = state.file;
@@ -167,7 +188,9 @@ export async function receiveUpload(request: Request): Promise<ReceivedUpload> {
       await rm(received.tempPath, { force: true });
     }
     bb.destroy();
-    if (!ended) drainInBackground(reader);
+    // A stalled sender is not waited for: hang up on it, the answer is already on its way.
+    if (timedOut) void reader.cancel().catch(() => undefined);
+    else if (!ended) drainInBackground(reader);
     throw failure ?? new HttpError(400, 'Choose a file to upload (the field named "file" is missing).', 'file');
   }
   const { size, sha256 } = await received.done;

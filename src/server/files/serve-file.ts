@@ -1,12 +1,14 @@
 import { open } from 'node:fs/promises';
-import { isFileId } from '~/lib/file-url';
 import { Readable } from 'node:stream';
 import { eq } from 'drizzle-orm';
 import { files, venues } from '~/db/schema';
 import { withExtension } from '~/lib/file-name';
+import { isFileId } from '~/lib/file-url';
 import { FILE_VARIANTS, type FileVariant } from '~/lib/schemas/file';
 import { getDb } from '~/server/db';
-import { loadVenue, requirePermission, requireUser } from '~/server/guard';
+import { isGuest, type Guest } from '~/lib/permissions';
+import { isAdvanceFile } from '~/server/advance';
+import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from '~/server/guard';
 import { HttpError } from '~/server/http';
 import type { SessionUser } from '~/server/session';
 import { contentDisposition } from './content-disposition';
@@ -14,13 +16,12 @@ import { FILE_NOT_FOUND, type FileRow } from './file-records';
 import { ensureStorageReady } from './storage-sweep';
 import { storedPath } from './storage-paths';
 
-
 /**
  * The file row, for people who may read its venue. A file of a venue the person is not a member
  * of answers exactly like a file that does not exist.
  */
-export async function loadReadableFile(user: SessionUser | null | undefined, fileId: string | undefined): Promise<FileRow> {
-  const signedIn = requireUser(user);
+export async function loadReadableFile(principal: RequestPrincipal, fileId: string | undefined): Promise<FileRow> {
+  const signedIn: SessionUser | Guest = isGuest(principal) ? principal : requireUser(principal);
   if (!isFileId(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
   const db = await getDb();
   const [found] = await db.select({ file: files, venueSlug: venues.slug }).from(files).innerJoin(venues, eq(venues.id, files.venueId)).where(eq(files.id, fileId)).limit(1);
@@ -31,6 +32,12 @@ export async function loadReadableFile(user: SessionUser | null | undefined, fil
   } catch (err) {
     if (err instanceof HttpError && err.status === 404) throw new HttpError(404, FILE_NOT_FOUND);
     throw err;
+  }
+  if (isGuest(signedIn)) {
+    // A guest may fetch exactly the files the advance sheet shows, nothing else of the venue.
+    requirePermission(signedIn, 'advance.read', access);
+    if (!(await isAdvanceFile(found.file.venueId, found.file.id))) throw new HttpError(404, FILE_NOT_FOUND);
+    return found.file;
   }
   requirePermission(signedIn, 'venue.read', access);
   return found.file;

@@ -1,4 +1,4 @@
-import { mkdir, readdir, rm } from 'node:fs/promises';
+import { mkdir, readdir, rm, stat } from 'node:fs/promises';
 import { join } from 'node:path';
 import { eq } from 'drizzle-orm';
 import { files } from '~/db/schema';
@@ -31,6 +31,24 @@ export function ensureStorageReady(): Promise<void> {
   return ready;
 }
 
+/**
+ * One of several server processes (WEB_CONCURRENCY > 1) cannot know what the others are doing:
+ * another may be mid-upload, its bytes in the temp folder or already renamed but not yet given a
+ * row. There, only litter older than any upload could take is removed; a lone process has
+ * nothing in flight while it sweeps (every file operation waits for the sweep).
+ */
+const IN_FLIGHT_MS = 30 * 60 * 1000;
+
+async function oldEnough(path: string): Promise<boolean> {
+  // src/cli/serve.mjs hands its workers the resolved number of processes.
+  if (Number(process.env.WEB_CONCURRENCY ?? '1') <= 1) return true;
+  try {
+    return Date.now() - (await stat(path)).mtimeMs > IN_FLIGHT_MS;
+  } catch {
+    return false;
+  }
+}
+
 export interface SweepReport {
   tempRemoved: number;
   orphansRemoved: number;
@@ -46,6 +64,7 @@ export interface SweepReport {
 export async function sweepStorage(): Promise<SweepReport> {
   const report: SweepReport = { tempRemoved: 0, orphansRemoved: 0, flaggedMissing: 0, foundAgain: 0 };
   for (const entry of await readdir(tempDir())) {
+    if (!(await oldEnough(join(tempDir(), entry)))) continue;
     await rm(join(tempDir(), entry), { recursive: true, force: true });
     report.tempRemoved++;
   }
@@ -58,7 +77,7 @@ export async function sweepStorage(): Promise<SweepReport> {
   const onDisk = new Set((await readdir(uploadsDir())).filter((name) => STORED_NAME.test(name)));
 
   for (const name of onDisk) {
-    if (referenced.has(name)) continue;
+    if (referenced.has(name) || !(await oldEnough(join(uploadsDir(), name)))) continue;
     await rm(join(uploadsDir(), name), { force: true });
     report.orphansRemoved++;
   }

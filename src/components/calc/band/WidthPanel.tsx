@@ -18,7 +18,7 @@ export default function WidthPanel({ s, set }: BandPanelProps) {
   const start = STARTS.some((o) => o.value === s.start) ? s.start : 'q';
   const outcome = attempt(() => {
     if (start === 'edges') return solveBand({ low: num(s.low, 'the lower edge'), high: num(s.high, 'the upper edge') });
-    const width = start === 'q' ? { q: num(s.q, 'Q') } : { octaves: num(s.oct, 'the width in octaves') };
+    const width = start === 'q' ? { q: num(s.q, 'Q') } : { octaves: num(s.oct, 'the width in octaves', true) };
     // An empty centre is allowed: Q and octaves convert without knowing where the band sits.
     const hasCentre = s.f0.trim() !== '';
     return solveBand((hasCentre ? { ...width, f0: num(s.f0, 'the centre frequency') } : width) as BandInput);
@@ -36,7 +36,7 @@ export default function WidthPanel({ s, set }: BandPanelProps) {
           {start === 'q' ? (
             <NumberField label="Q" value={s.q} onChange={(q) => set({ q })} testId="width-q" />
           ) : (
-            <NumberField label="Width" value={s.oct} onChange={(oct) => set({ oct })} unit="oct" testId="width-oct" />
+            <NumberField label="Width" value={s.oct} onChange={(oct) => set({ oct })} unit="oct" hint="A decimal or a fraction such as 1/3." testId="width-oct" />
           )}
           <NumberField label="Centre (optional)" value={s.f0} onChange={(f0) => set({ f0 })} unit="Hz" testId="width-f0" />
         </div>

@@ -1,4 +1,5 @@
 import Choice from '~/components/calc/Choice';
+import { lengthFromMeters } from '~/lib/acoustics';
 import NumberField from '~/components/calc/NumberField';
 import Panel from '~/components/calc/Panel';
 import Result, { Figure } from '~/components/calc/Result';
@@ -31,12 +32,13 @@ export default function AirPanel({ s, set, air }: DelayPanelProps) {
         <Choice label="Distances in" value={s.unit} onChange={switchLength} options={[{ value: 'm', label: 'm' }, { value: 'ft', label: 'ft' }]} testId="length-unit" />
         <Choice label="Times in" value={s.timeUnit} onChange={switchTime} options={[{ value: 'ms', label: 'ms' }, { value: 'samples', label: 'samples' }]} testId="time-unit" />
       </div>
+      <NumberField label="Relative humidity (optional)" value={s.rh ?? ''} onChange={(rh) => set({ rh })} unit="%" hint="Leave empty for dry air; humid air is faster (Cramer 1993)." testId="rh" />
       <SelectField label="Sample rate" value={s.rate} options={SAMPLE_RATES} onChange={(rate) => set({ rate })} testId="rate" />
       <Result outcome={air} testId="speed-result">
         {({ speed }) => (
           <div className="flex gap-6">
             <Figure label="Speed of sound" value={fixed(speed, 1)} unit="m/s" />
-            <Figure label="" value={fixed(speed / 0.3048, 0)} unit="ft/s" />
+            <Figure label="" value={fixed(lengthFromMeters(speed, 'ft'), 0)} unit="ft/s" />
           </div>
         )}
       </Result>

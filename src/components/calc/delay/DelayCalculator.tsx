@@ -1,4 +1,4 @@
-import { celsiusFromFahrenheit, speedOfSound } from '~/lib/acoustics';
+import { celsiusFromTyped, speedOfSound } from '~/lib/acoustics';
 import { attempt, num } from '~/components/calc/attempt';
 import { useQueryState } from '~/components/calc/use-query-state';
 import AirPanel from './AirPanel';
@@ -11,9 +11,10 @@ import { DELAY_DEFAULTS, DELAY_REMEMBERED } from './delay-state';
 export default function DelayCalculator({ search }: { search: string }) {
   const [s, set] = useQueryState(DELAY_DEFAULTS, search, DELAY_REMEMBERED);
   const air = attempt(() => {
-    const typed = num(s.temp, 'the air temperature');
-    const celsius = s.tempUnit === 'F' ? celsiusFromFahrenheit(typed) : typed;
-    return { celsius, speed: speedOfSound(celsius) };
+    // Checked in the unit typed, so 150 °F is refused in °F.
+    const celsius = celsiusFromTyped(num(s.temp, 'the air temperature'), s.tempUnit);
+    const rh = (s.rh ?? '').trim() === '' ? undefined : num(s.rh, 'the relative humidity');
+    return { celsius, rh, speed: speedOfSound(celsius, rh) };
   });
   const props = { s, set, air };
   return (

@@ -1,17 +1,18 @@
-import { msToSamples, subToTopOffset } from '~/lib/acoustics';
+import { msToSamples, periodMs, subTopCandidates } from '~/lib/acoustics';
 import NumberField from '~/components/calc/NumberField';
 import Panel from '~/components/calc/Panel';
-import Result, { Figure } from '~/components/calc/Result';
+import Result from '~/components/calc/Result';
 import { attempt, num } from '~/components/calc/attempt';
 import { fixed } from '~/components/calc/format';
 import { GUIDE, type DelayPanelProps } from './delay-state';
 
-/** Time offset between sub and top from the phase difference measured at the crossover. */
+/** Every usual fix for the phase difference measured at the crossover, best first. */
 export default function SubTopPanel({ s, set }: DelayPanelProps) {
   const outcome = attempt(() => {
-    const result = subToTopOffset(num(s.xover, 'the crossover frequency'), num(s.phase, 'the phase difference'));
+    const freq = num(s.xover, 'the crossover frequency');
     const rate = num(s.rate, 'the sample rate');
-    return { ...result, samples: msToSamples(result.offsetMs, rate), periodSamples: msToSamples(result.periodMs, rate) };
+    const candidates = subTopCandidates(freq, num(s.phase, 'the phase difference')).map((c) => ({ ...c, samples: msToSamples(c.delayMs, rate) }));
+    return { candidates, period: periodMs(freq) };
   });
   const inSamples = s.timeUnit === 'samples';
   return (
@@ -21,12 +22,25 @@ export default function SubTopPanel({ s, set }: DelayPanelProps) {
         <NumberField label="Sub lags top by" value={s.phase} onChange={(phase) => set({ phase })} unit="°" signed hint="Negative when the sub leads." testId="subtop-phase" />
       </div>
       <Result outcome={outcome} testId="subtop-result">
-        {({ offsetMs, delayOn, periodMs, samples, periodSamples }) => (
+        {({ candidates, period }) => (
           <div className="flex flex-col gap-2">
-            <Figure label={`Delay the ${delayOn} by`} value={inSamples ? fixed(samples, 0) : fixed(offsetMs, 2)} unit={s.timeUnit} big testId="subtop-offset" />
+            <ol className="flex flex-col gap-2" data-testid="subtop-candidates">
+              {candidates.map((c, i) => (
+                <li key={i} className={`rounded-lg border border-line p-2 ${i === 0 ? 'bg-surface' : ''}`} data-testid={`subtop-candidate-${i}`}>
+                  <div className={i === 0 ? 'text-lg font-bold' : 'font-semibold'}>
+                    {c.invertPolarity ? 'Invert the sub' : ''}
+                    {c.invertPolarity && c.delayOn !== 'none' ? ' and delay the ' : c.delayOn !== 'none' ? 'Delay the ' : ''}
+                    {c.delayOn !== 'none' && `${c.delayOn} by ${inSamples ? `${fixed(c.samples, 0)} samples` : `${fixed(c.delayMs, 2)} ms`}`}
+                  </div>
+                  <div className="text-sm text-muted">
+                    Phase left at the crossover: {fixed(c.phaseErrorDeg, 0)}°{c.action.includes('cycle') ? ` · ${c.action.includes('later') ? 'one cycle later' : 'one cycle earlier'}` : ''}
+                  </div>
+                </li>
+              ))}
+            </ol>
             <p className="text-sm text-muted">
-              One cycle at the crossover lasts {inSamples ? `${fixed(periodSamples, 0)} samples` : `${fixed(periodMs, 2)} ms`}: adding or removing whole cycles lines up the
-              phase just as well. Pick the candidate that also lines up the arrivals (impulse peaks or measured distances).
+              One cycle at the crossover lasts {inSamples ? `${fixed(msToSamples(period, num(s.rate, 'the sample rate')), 0)} samples` : `${fixed(period, 2)} ms`}: whole cycles line up the phase
+              just as well. A polarity flip alone is exact only at 180°. Pick the candidate that also lines up the arrivals (impulse peaks or measured distances).
             </p>
           </div>
         )}

@@ -1,11 +1,11 @@
-import { delayMs, distanceFromMs, msToSamples, samplesToMs } from '~/lib/acoustics';
+import { delayMs, distanceFromMs, metersFromTyped, msToSamples, samplesToMs } from '~/lib/acoustics';
 import Choice from '~/components/calc/Choice';
 import NumberField from '~/components/calc/NumberField';
 import Panel from '~/components/calc/Panel';
 import Result, { Figure } from '~/components/calc/Result';
 import { attempt, num } from '~/components/calc/attempt';
 import { fixed } from '~/components/calc/format';
-import { fromMeters, toMeters } from '~/components/calc/unit-switch';
+import { fromMeters } from '~/components/calc/unit-switch';
 import { GUIDE, type DelayPanelProps } from './delay-state';
 import SaveToPage from '~/components/calc/SaveToPage';
 import { delayBlockFromCalc } from '~/lib/doc/blocks/calc-blocks';
@@ -17,12 +17,12 @@ export default function TravelPanel({ s, set, air }: DelayPanelProps) {
     if (!air.ok) throw new RangeError(air.message);
     const rate = num(s.rate, 'the sample rate');
     if (fromDistance) {
-      const ms = delayMs(toMeters(num(s.dist, 'the distance'), s.unit), air.value.celsius);
+      const ms = delayMs(metersFromTyped(num(s.dist, 'the distance'), s.unit), air.value.celsius, air.value.rh);
       return { ms, samples: msToSamples(ms, rate), meters: null };
     }
     const typed = num(s.time, s.timeUnit === 'samples' ? 'the number of samples' : 'the time');
     const ms = s.timeUnit === 'samples' ? samplesToMs(typed, rate) : typed;
-    return { ms, samples: msToSamples(ms, rate), meters: distanceFromMs(ms, air.value.celsius) };
+    return { ms, samples: msToSamples(ms, rate), meters: distanceFromMs(ms, air.value.celsius, air.value.rh) };
   });
   const timeFigures = (ms: number, samples: number) => {
     const msFigure = <Figure key="ms" label="Time" value={fixed(ms, 2)} unit="ms" big={s.timeUnit === 'ms'} testId="travel-ms" />;

@@ -3,6 +3,7 @@ import type { Outcome } from '~/components/calc/attempt';
 
 export const DELAY_DEFAULTS: QueryState = {
   temp: '20',
+  rh: '',
   tempUnit: 'C',
   unit: 'm',
   timeUnit: 'ms',
@@ -13,15 +14,18 @@ export const DELAY_DEFAULTS: QueryState = {
   main: '30',
   fill: '8',
   offset: '0',
+  latency: '0',
   xover: '80',
   phase: '0',
 };
 
 /** Kept between visits and shared with the other calculators. */
-export const DELAY_REMEMBERED = ['temp', 'tempUnit', 'unit', 'timeUnit', 'rate'] as const;
+export const DELAY_REMEMBERED = ['temp', 'tempUnit', 'rh', 'unit', 'timeUnit', 'rate'] as const;
 
 export interface Air {
   celsius: number;
+  /** Relative humidity, %, when typed; dry air otherwise. */
+  rh?: number;
   speed: number;
 }
 

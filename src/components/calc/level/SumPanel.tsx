@@ -1,4 +1,4 @@
-import { LIMITS, coherentSum, incoherentSum } from '~/lib/acoustics';
+import { LIMITS, coherentTotal, incoherentSum } from '~/lib/acoustics';
 import Choice from '~/components/calc/Choice';
 import NumberField from '~/components/calc/NumberField';
 import Panel from '~/components/calc/Panel';
@@ -21,7 +21,7 @@ export default function SumPanel({ s, set }: LevelPanelProps) {
   const edit = (list: string[], i: number, value: string) => list.map((v, j) => (j === i ? value : v));
   const outcome = attempt(() => {
     const values = levels.map((v, i) => num(v, `level ${i + 1}`));
-    return coherent ? coherentSum(values, phases.map((p, i) => num(p, `phase ${i + 1}`))) : incoherentSum(values);
+    return coherent ? coherentTotal(values, phases.map((p, i) => num(p, `phase ${i + 1}`))) : { totalDb: incoherentSum(values), isNull: false };
   });
   return (
     <Panel title="Adding sources" guide={`${GUIDE}#adding-sources`} testId="sum-panel">
@@ -58,7 +58,18 @@ export default function SumPanel({ s, set }: LevelPanelProps) {
         Add a source
       </button>
       <Result outcome={outcome} testId="sum-result">
-        {(total) => <Figure label={coherent ? 'Total (same signal)' : 'Total (unrelated)'} value={fixed(total, 1)} unit="dB" big testId="sum-total" />}
+        {({ totalDb, isNull }) =>
+          isNull ? (
+            <div>
+              <Figure label="Total (same signal)" value="Null" big testId="sum-total" />
+              <p className="text-sm text-muted" data-testid="sum-null">
+                The sources cancel completely at this frequency: no level at all here, in theory. In a room, reflections and small level or phase differences leave a deep dip instead.
+              </p>
+            </div>
+          ) : (
+            <Figure label={coherent ? 'Total (same signal)' : 'Total (unrelated)'} value={fixed(totalDb, 1)} unit="dB" big testId="sum-total" />
+          )
+        }
       </Result>
     </Panel>
   );

@@ -9,7 +9,7 @@ import { sendMail } from '~/server/mail/mailer';
  */
 export const POST: APIRoute = ({ locals, request, redirect }) =>
   handle(async () => {
-    const user = requireUser(locals.user);
+    const user = requireUser(locals.principal);
     requirePermission(user, 'admin.manage');
     try {
       await sendMail({

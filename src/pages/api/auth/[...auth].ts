@@ -2,6 +2,7 @@ import type { APIRoute } from 'astro';
 import { AstroAuth } from '~/server/auth/astro-auth.mjs';
 import { clearSignInFailures, recordSignInFailure, signInRetryAfter } from '~/server/auth/rate-limit';
 import { json } from '~/server/http';
+import { endAllSessions, readSessionUser } from '~/server/session';
 
 export const prerender = false;
 
@@ -13,11 +14,42 @@ const authHandlers = AstroAuth();
  */
 export const GET: APIRoute = (context) => authHandlers.GET(context) as Promise<Response>;
 
+/** The e-mail field exactly as Auth.js reads the body (JSON, or form fields where the last repeat wins). */
+async function emailAuthJsWillUse(request: Request): Promise<string> {
+  const type = request.headers.get('content-type') ?? '';
+  try {
+    if (type.includes('application/json')) {
+      const body = (await request.clone().json()) as { email?: unknown };
+      return typeof body?.email === 'string' ? body.email : '';
+    }
+    if (type.includes('application/x-www-form-urlencoded')) {
+      const fields = Object.fromEntries(new URLSearchParams(await request.clone().text()));
+      return fields.email ?? '';
+    }
+  } catch {
+    // An unreadable body signs nobody in; count it against the address only.
+  }
+  return '';
+}
+
+/** Sign-out ends the session on the server too: the person's session epoch moves on. */
+async function signOut(context: Parameters<APIRoute>[0]): Promise<Response> {
+  const user = await readSessionUser(context.request);
+  const response = (await authHandlers.POST(context)) as Response;
+  if (user && response.status < 400) await endAllSessions(user.id);
+  const copy = new Response(response.body, response);
+  // A shared FOH laptop keeps nothing of the signed-in pages after sign-out.
+  copy.headers.set('clear-site-data', '"cache"');
+  return copy;
+}
+
 export const POST: APIRoute = async (context) => {
+  if (context.url.pathname.endsWith('/signout')) return signOut(context);
   if (!context.url.pathname.endsWith('/callback/credentials')) return authHandlers.POST(context) as Promise<Response>;
 
-  const form = await context.request.clone().formData().catch(() => null);
-  const email = String(form?.get('email') ?? '').slice(0, 254);
+  const email = (await emailAuthJsWillUse(context.request)).slice(0, 254);
+  // The server entry (src/cli/serve.mjs) has already replaced X-Forwarded-For with the address
+  // it trusts, so this is the socket address unless TRUST_PROXY names the proxy in front.
   const address = context.clientAddress;
   const retryAfter = await signInRetryAfter(email, address);
   if (retryAfter > 0) {

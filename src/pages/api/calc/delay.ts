@@ -3,11 +3,12 @@ import { DelayQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
 /** Time of flight over a distance at an air temperature, and the same in samples at a rate. */
-export const GET = calcGet(DelayQuerySchema, ({ distanceMeters, temperatureCelsius, rate }) => {
-  const ms = delayMs(distanceMeters, temperatureCelsius);
+export const GET = calcGet(DelayQuerySchema, ({ distanceMeters, temperatureCelsius, rate, rh }) => {
+  const ms = delayMs(distanceMeters, temperatureCelsius, rh);
   return {
     ms,
-    speed: speedOfSound(temperatureCelsius),
+    speed: speedOfSound(temperatureCelsius, rh),
+    ...(rh !== undefined ? { rh } : {}),
     ...(rate !== undefined ? { samples: msToSamples(ms, rate), rate } : {}),
     distanceMeters,
     temperatureCelsius,

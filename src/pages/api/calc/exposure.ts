@@ -1,15 +1,30 @@
-import { EXPOSURE_CAUTION, nioshRecommendedHours, oshaPermissibleHours } from '~/lib/acoustics';
+import { EXPOSURE_CAUTION, exposureLimit } from '~/lib/acoustics';
 import { ExposureQuerySchema } from '~/lib/schemas/calc';
 import { calcGet } from './_calc-route';
 
-/** The two US rules are answered one at a time, never blended, and always with the caution. */
+/** Each rule is answered on its own, never blended, always with the caution and its edges flagged. */
 const RULES = {
-  osha: { hours: oshaPermissibleHours, criterionDba: 90, exchangeRateDb: 5, name: 'OSHA 29 CFR 1910.95 permissible exposure' },
-  niosh: { hours: nioshRecommendedHours, criterionDba: 85, exchangeRateDb: 3, name: 'NIOSH recommended exposure limit (Publication 98-126)' },
+  osha: { criterionDba: 90, exchangeRateDb: 5, name: 'OSHA 29 CFR 1910.95 permissible exposure (Table G-16, 90–115 dBA)' },
+  niosh: { criterionDba: 85, exchangeRateDb: 3, name: 'NIOSH recommended exposure limit (Publication 98-126)' },
+  eu: { criterionDba: 87, exchangeRateDb: 3, name: 'EU Directive 2003/10/EC exposure limit value, LEX,8h 87 dB(A) (action values 80 and 85)' },
 } as const;
 
 export const GET = calcGet(ExposureQuerySchema, ({ level, standard }) => {
   const rule = RULES[standard];
-  const hours = rule.hours(level);
-  return { hours, minutes: hours * 60, standard, rule: rule.name, criterionDba: rule.criterionDba, exchangeRateDb: rule.exchangeRateDb, caution: EXPOSURE_CAUTION };
+  const limit = exposureLimit(level, standard);
+  const note = limit.notPermitted
+    ? 'Not permitted: the rule allows no exposure at this level at all.'
+    : limit.noDailyLimit
+      ? 'No daily limit: at this level the rule allows more than 24 hours.'
+      : undefined;
+  return {
+    ...limit,
+    minutes: limit.hours === null ? null : limit.hours * 60,
+    standard,
+    rule: rule.name,
+    criterionDba: rule.criterionDba,
+    exchangeRateDb: rule.exchangeRateDb,
+    ...(note ? { note } : {}),
+    caution: EXPOSURE_CAUTION,
+  };
 });

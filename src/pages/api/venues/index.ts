@@ -7,14 +7,14 @@ import { createVenue, listVenuesFor } from '~/server/venues';
 
 export const GET: APIRoute = ({ locals }) =>
   handle(async () => {
-    const user = requireUser(locals.user);
+    const user = requireUser(locals.principal);
     const venues = await listVenuesFor(user);
     return json({ venues });
   });
 
 export const POST: APIRoute = ({ locals, request }) =>
   handle(async () => {
-    const user = requireUser(locals.user);
+    const user = requireUser(locals.principal);
     requirePermission(user, 'venue.create');
     const input = parseWith(VenueCreateSchema, await readJsonBody(request));
     const venue = await createVenue(input, user);

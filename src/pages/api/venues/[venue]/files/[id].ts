@@ -7,14 +7,14 @@ import { handle, json, parseWith, readJsonBody } from '~/server/http';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
-    const { venue } = await guardVenue(locals.user, params.venue, 'venue.read');
+    const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
     return json<FileAnswer>({ file: await loadVenueFile(venue.id, params.id) });
   });
 
 /** `{caption}`: whoever may upload may caption. */
 export const PATCH: APIRoute = ({ locals, params, request }) =>
   handle(async () => {
-    const { venue, user } = await guardVenue(locals.user, params.venue, 'file.upload');
+    const { venue, user } = await guardVenue(locals.principal, params.venue, 'file.upload');
     await loadVenueFile(venue.id, params.id);
     const { caption } = parseWith(FileCaptionSchema, await readJsonBody(request));
     return json<FileAnswer>({ file: await updateCaption(venue.id, params.id, caption, user) });
@@ -23,7 +23,7 @@ export const PATCH: APIRoute = ({ locals, params, request }) =>
 /** A file that a page shows answers 409 with `usedBy` unless `?confirm=1` is given. */
 export const DELETE: APIRoute = ({ locals, params, url }) =>
   handle(async () => {
-    const { venue, user } = await guardVenue(locals.user, params.venue, 'file.delete');
+    const { venue, user } = await guardVenue(locals.principal, params.venue, 'file.delete');
     const confirmed = url.searchParams.get('confirm') === '1';
     const { usedBy } = await deleteFile(venue.id, params.id, user, confirmed);
     // deleteFile answered 404 for a missing id, so params.id is set here.

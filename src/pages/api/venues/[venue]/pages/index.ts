@@ -8,14 +8,14 @@ import { listPages } from '~/server/venues';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
-    const { venue } = await guardVenue(locals.user, params.venue, 'venue.read');
+    const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
     const pages = await listPages(venue.id);
     return json({ pages });
   });
 
 export const POST: APIRoute = ({ locals, params, request }) =>
   handle(async () => {
-    const { venue, user } = await guardVenue(locals.user, params.venue, 'page.edit');
+    const { venue, user } = await guardVenue(locals.principal, params.venue, 'page.edit');
     const input = parseWith(PageCreateSchema, await readJsonBody(request));
     const created = await createPage(venue.id, input, user);
     return json<PageSaved<Date>>(created, 201, { location: `/api/venues/${venue.slug}/pages/${created.page.slug}` });

@@ -2,14 +2,14 @@ import type { APIRoute } from 'astro';
 import type { PageAnswer, PageSaved } from '~/lib/api-types';
 import { PageSaveSchema } from '~/lib/schemas/page';
 import { guardVenue } from '~/server/guard';
-import { handle, json, parseWith, readJsonBody } from '~/server/http';
+import { handle, idempotencyKey, json, parseWith, readJsonBody } from '~/server/http';
 import { guardPage, loadPageWithCurrent, pageJson } from '~/server/pages';
 import { authorJson, revisionJson } from '~/server/revision-json';
 import { saveRevision } from '~/server/revisions';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
-    const { venue } = await guardVenue(locals.user, params.venue, 'venue.read');
+    const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
     const { page, section, revision } = await loadPageWithCurrent(venue.id, params.page);
     return json<PageAnswer<Date>>({
       page: pageJson(page, section),
@@ -17,11 +17,15 @@ export const GET: APIRoute = ({ locals, params }) =>
     });
   });
 
-/** Saves on top of `baseRevision`; 409 with the current revision when someone saved first. */
+/**
+ * Saves on top of `baseRevision`; 409 with the current revision when someone saved first. An
+ * `Idempotency-Key` header makes a retry of a save that landed answer 200 with its revision.
+ */
 export const PUT: APIRoute = ({ locals, params, request }) =>
   handle(async () => {
-    const { venue, user } = await guardPage(locals.user, params.venue, params.page, 'page.edit');
+    const { venue, user } = await guardPage(locals.principal, params.venue, params.page, 'page.edit');
+    const key = idempotencyKey(request);
     const input = parseWith(PageSaveSchema, await readJsonBody(request));
-    const saved = await saveRevision(venue.id, params.page, input, user);
+    const saved = await saveRevision(venue.id, params.page, input, user, key);
     return json<PageSaved<Date>>(saved);
   });

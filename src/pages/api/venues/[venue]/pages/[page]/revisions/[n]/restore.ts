@@ -11,7 +11,7 @@ import { restoreRevision, revisionNumberParam } from '~/server/revisions';
  */
 export const POST: APIRoute = ({ locals, params, request }) =>
   handle(async () => {
-    const { venue, user } = await guardPage(locals.user, params.venue, params.page, 'page.edit');
+    const { venue, user } = await guardPage(locals.principal, params.venue, params.page, 'page.edit');
     const n = revisionNumberParam(params.n);
     const hasBody = request.headers.has('content-type') || Number(request.headers.get('content-length') ?? '0') > 0;
     const input = parseWith(RestoreSchema, hasBody ? await readJsonBody(request) : {});

@@ -1,0 +1,69 @@
+import type { PmNode } from '~/lib/doc/types';
+import { fileIdsInDoc } from '~/lib/doc/file-refs';
+import { renderDocHtml } from '~/lib/doc/render-html';
+import { fileIdOfUrl } from '~/lib/file-url';
+import { availableFileIds } from './files/available-files';
+
+/**
+ * The read view's body HTML, cached. A revision never changes after it is written, so its HTML
+ * depends only on the revision id and on which of the files it shows can still be served; the
+ * set of files it points at is found once per revision, their availability is read from the
+ * database on every request and must match the entry's. A save or restore makes a new
+ * revision id, a deleted or vanished file changes the set: either misses the cache, in this
+ * process or any other, so nothing stale is ever served. Entries are only an optimisation, and
+ * bounded by total size (least recently used go first).
+ */
+const MAX_CACHED_CHARS = 16 * 1024 * 1024;
+
+interface Entry {
+  /** The files the revision points at, found once by the one definition (fileIdsInDoc). */
+  referenced: Set<string>;
+  /** Which of them were servable when `html` was rendered. */
+  availableKey: string;
+  html: string;
+}
+
+const cache = new Map<string, Entry>();
+let cachedChars = 0;
+
+export interface StoredRevision {
+  id: string;
+  /** The stored JSON text of the document. */
+  doc: string;
+}
+
+export async function revisionHtml(venueId: string, revision: StoredRevision): Promise<string> {
+  const hit = cache.get(revision.id);
+  let parsed: PmNode | undefined;
+  const referenced = hit?.referenced ?? fileIdsInDoc((parsed = JSON.parse(revision.doc) as PmNode));
+  const available = referenced.size ? await availableFileIds(venueId, referenced) : new Set<string>();
+  const availableKey = [...available].sort().join(',');
+  if (hit && hit.availableKey === availableKey) {
+    // Re-inserting moves it to the young end of the Map's order.
+    cache.delete(revision.id);
+    cache.set(revision.id, hit);
+    return hit.html;
+  }
+  parsed ??= JSON.parse(revision.doc) as PmNode;
+  const html = renderDocHtml(parsed, { isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? '') });
+  remember(revision.id, { referenced, availableKey, html });
+  return html;
+}
+
+const sizeOf = (id: string, e: Entry) => e.html.length + id.length + e.availableKey.length;
+
+function remember(id: string, entry: Entry): void {
+  const old = cache.get(id);
+  if (old) {
+    cache.delete(id);
+    cachedChars -= sizeOf(id, old);
+  }
+  if (entry.html.length > MAX_CACHED_CHARS / 8) return;
+  cache.set(id, entry);
+  cachedChars += sizeOf(id, entry);
+  for (const [oldId, oldEntry] of cache) {
+    if (cachedChars <= MAX_CACHED_CHARS) break;
+    cache.delete(oldId);
+    cachedChars -= sizeOf(oldId, oldEntry);
+  }
+}

@@ -1,0 +1,74 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addBigVenue } from '../bench/big-venue';
+import { DEMO } from '../helpers/paths';
+import { startServer, type TestServer } from '../helpers/server';
+import { signIn, type Client } from '../helpers/session';
+
+/** A venue of 1,700 pages in 8 sections (212 or 213 each): the home stays small, every page is reachable. */
+let server: TestServer;
+let manager: Client;
+let viewer: Client;
+let big: string;
+
+beforeAll(async () => {
+  server = await startServer();
+  big = await addBigVenue(server.dbPath, DEMO.manager, 1700);
+  manager = await signIn(server.url, DEMO.manager);
+  viewer = await signIn(server.url, DEMO.viewer);
+});
+afterAll(() => server?.stop());
+
+const html = async (who: Client, path: string) => {
+  const res = await who.fetch(path);
+  expect(res.status, path).toBe(200);
+  return res.text();
+};
+const pageLinks = (text: string) => [...text.matchAll(new RegExp(`href="/venues/${big}/(page-\\d+)"`, 'g'))].map((m) => m[1]);
+
+describe('a venue of many pages', () => {
+  it('the home shows the first 50 of each section and a link to all of them, with true totals', async () => {
+    const text = await html(manager, `/venues/${big}`);
+    expect(text).toContain('1700 pages');
+    expect(pageLinks(text)).toHaveLength(8 * 50);
+    expect(text).toMatch(/All 213 pages in Part 1/);
+    expect(text).toContain(`href="/venues/${big}?section=part-0"`);
+  });
+
+  it('a section lists its pages 200 at a time; together the pages hold each page exactly once', async () => {
+    const first = await html(manager, `/venues/${big}?section=part-0`);
+    expect(pageLinks(first)).toHaveLength(200);
+    expect(first).toMatch(/Page 1 of 2/);
+    expect(first).toMatch(new RegExp(`href="/venues/${big}\\?section=part-0&(amp;|#38;)page=2"`));
+    const second = await html(manager, `/venues/${big}?section=part-0&page=2`);
+    expect(pageLinks(second)).toHaveLength(13);
+    expect(second).toMatch(/Previous/);
+    const all = [...pageLinks(first), ...pageLinks(second)];
+    expect(new Set(all).size).toBe(213);
+    // Section 0 holds every 8th page of the venue.
+    expect(all.every((slug) => Number(slug.slice(5)) % 8 === 0)).toBe(true);
+  });
+
+  it.each([
+    ['an unknown section', '?section=no-such-part', /There is no section “no-such-part” here/],
+    ['a page number that is not one', '?section=part-1&page=abc', /Page 1 of 2/],
+    ['a page past the end', '?section=part-1&page=9999', /No pages yet/],
+    ['hostile text', `?section=${encodeURIComponent('"><script>x</script>')}`, /There is no section/],
+  ])('%s: still the venue, never a 500', async (_name, query, expected) => {
+    const text = await html(manager, `/venues/${big}${query}`);
+    expect(text).toMatch(expected);
+    expect(text).not.toContain('<script>x</script>');
+  });
+
+  it('a person who is not a member gets the 404, section or not', async () => {
+    expect((await viewer.fetch(`/venues/${big}`)).status).toBe(404);
+    expect((await viewer.fetch(`/venues/${big}?section=part-0`)).status).toBe(404);
+  });
+
+  it('the demo venue, with few pages, still lists every page on its home', async () => {
+    const venue = ((await (await viewer.fetch('/api/venues')).json()) as { venues: { slug: string }[] }).venues[0].slug;
+    const { pages } = (await (await viewer.fetch(`/api/venues/${venue}/pages`)).json()) as { pages: { slug: string }[] };
+    const text = await html(viewer, `/venues/${venue}`);
+    for (const p of pages) expect(text).toContain(`href="/venues/${venue}/${p.slug}"`);
+    expect(text).not.toContain('data-testid="section-more"');
+  });
+});
