@@ -1,14 +1,14 @@
 import { and, asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
 import { isCheckStale } from '~/lib/check-staleness';
-import { traceIdsInDocText } from './files/block-context';
+import { fileIdsInDoc, fileRefsInDoc } from '~/lib/doc/file-refs';
 import { loadVenueTraces } from './files/trace-data';
 import { renderDocHtml } from '~/lib/doc/render-html';
+import { fileIdOfUrl } from '~/lib/file-url';
 import type { PmNode } from '~/lib/doc/types';
 import { recordAudit } from './audit';
 import { getDb, writeTx } from './db';
-import { availableFileIds, fileIdOfUrl } from './files/available-files';
-import { fileIdsInDoc } from './files/file-usage';
+import { availableFileIds } from './files/available-files';
 import { HttpError } from './http';
 import type { VenueRow } from './guard';
 import type { SessionUser } from './session';
@@ -48,18 +48,15 @@ export interface SheetOptions {
 export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = {}) {
   const rows = await advanceRows(venue.id);
   const now = options.now ?? new Date();
-  const wanted = new Set<string>();
-  const traceIds = new Set<string>();
-  for (const r of rows) {
-    for (const id of fileIdsInDoc(r.doc ?? '')) wanted.add(id);
-    for (const id of traceIdsInDocText(r.doc ?? '')) traceIds.add(id);
-  }
-  const available = await availableFileIds(venue.id, [...wanted, ...traceIds]);
+  const docs = rows.map((r) => (r.doc ? (JSON.parse(r.doc) as PmNode) : null));
+  const refs = docs.map((doc) => (doc ? fileIdsInDoc(doc) : new Set<string>()));
+  const available = await availableFileIds(venue.id, new Set(refs.flatMap((ids) => [...ids])));
+  const traceIds = new Set(docs.flatMap((doc) => (doc ? fileRefsInDoc(doc).filter((f) => f.kind === 'trace').map((f) => f.fileId) : [])));
   const traces = await loadVenueTraces(venue.id, [...traceIds].filter((id) => available.has(id)));
   const fileUrl = (id: string) => (options.imageUrl ? options.imageUrl(`/files/${id}`) : `/files/${id}`);
-  return rows.map((r) => {
-    const doc = r.doc ? (JSON.parse(r.doc) as PmNode) : null;
-    const fileIds = [...fileIdsInDoc(r.doc ?? '')].filter((id) => available.has(id));
+  return rows.map((r, i) => {
+    const doc = docs[i];
+    const fileIds = [...refs[i]].filter((id) => available.has(id));
     return {
       slug: r.slug,
       title: r.title,
@@ -70,7 +67,7 @@ export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = 
       checkedBy: r.checkedAt ? (r.checkedByName ?? 'a former member') : null,
       checkStale: isCheckStale(r.sectionSlug, r.checkedAt, now, venue.checkStaleMonths),
       fileIds,
-      html: doc ? renderDocHtml(doc, { isImageAvailable: (src) => available.has(fileIdOfUrl(src)), imageUrl: options.imageUrl, blockContext: { traces, fileUrl } }) : '',
+      html: doc ? renderDocHtml(doc, { isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''), imageUrl: options.imageUrl, blockContext: { traces, fileUrl } }) : '',
     };
   });
 }
@@ -80,7 +77,7 @@ export type SheetPage = Awaited<ReturnType<typeof loadAdvanceSheet>>[number];
 /** Whether a file of this venue is used by a page on its advance sheet (what a guest may fetch). */
 export async function isAdvanceFile(venueId: string, fileId: string): Promise<boolean> {
   const rows = await advanceRows(venueId);
-  return rows.some((r) => fileIdsInDoc(r.doc ?? '').has(fileId) || traceIdsInDocText(r.doc ?? '').has(fileId));
+  return rows.some((r) => r.doc !== null && fileIdsInDoc(JSON.parse(r.doc) as PmNode).has(fileId));
 }
 
 /** Every live page with whether it is on the sheet, for the manager's selection screen. */

@@ -36,6 +36,9 @@ export async function getDb(): Promise<Db> {
 
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
+/** The database or a transaction: for reads that must also work inside `writeTx`. */
+export type Reader = Db | Tx;
+
 /**
  * Runs `work` in one write transaction, queued behind every other write of this process.
  * Inside `work` use only `tx`. Anything thrown rolls the whole transaction back.

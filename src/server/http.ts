@@ -15,7 +15,8 @@ export class HttpError extends Error {
   }
 }
 
-export function json(data: unknown, status = 200, headers: HeadersInit = {}): Response {
+/** A JSON answer; `json<SomeAnswer<Date>>(…)` checks it against the shape the islands read (~/lib/api-types). */
+export function json<T = unknown>(data: T, status = 200, headers: HeadersInit = {}): Response {
   return new Response(JSON.stringify(data), {
     status,
     headers: { 'content-type': 'application/json; charset=utf-8', 'cache-control': 'no-store', ...headers },
@@ -37,17 +38,27 @@ export async function handle(work: () => Promise<Response> | Response): Promise<
   }
 }
 
+export interface ParseOptions {
+  /**
+   * Answer the schema's sentence exactly as written. Otherwise a sentence that does not name its
+   * field gets the field put in front ("title: …"), so the person knows which input it means.
+   */
+  asWritten?: boolean;
+}
+
 /** The first zod issue, as a sentence a person can act on, with the field it concerns. */
-export function zodToHttpError(error: z.ZodError): HttpError {
+export function zodToHttpError(error: z.ZodError, { asWritten = false }: ParseOptions = {}): HttpError {
   const issue = error.issues[0];
   const field = issue?.path.length ? issue.path.map(String).join('.') : undefined;
   const message = issue?.message ?? 'The request is not valid.';
-  return new HttpError(400, field && !message.toLowerCase().includes(field.split('.').pop()!.toLowerCase()) ? `${field}: ${message}` : message, field);
+  const named = asWritten || !field || message.toLowerCase().includes(field.split('.').pop()!.toLowerCase());
+  return new HttpError(400, named ? message : `${field}: ${message}`, field);
 }
 
-export function parseWith<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
+/** The parsed input, or a 400 with the first issue's sentence: the one way a route refuses bad input. */
+export function parseWith<S extends z.ZodType>(schema: S, input: unknown, options: ParseOptions = {}): z.infer<S> {
   const result = schema.safeParse(input);
-  if (!result.success) throw zodToHttpError(result.error);
+  if (!result.success) throw zodToHttpError(result.error, options);
   return result.data;
 }
 

@@ -1,50 +1,12 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { files } from '~/db/schema';
-import { blockTraces, CROSSOVER_BLOCK, EQ_BLOCK, type TraceRef } from '~/lib/doc/blocks/block-data';
+import { fileRefsInDoc, type FileRef } from '~/lib/doc/file-refs';
 import type { PmNode } from '~/lib/doc/types';
 import type { Tx } from './db';
-import { fileIdsInDoc } from './files/file-usage';
 import { HttpError } from './http';
-
-/** One place a page document points at a stored file: a photo, or a link to /files/…. */
-export interface FileRef {
-  kind: 'photo' | 'link' | 'trace';
-  fileId: string;
-  url: string;
-  /** What the person sees: the photo's description or the link's text. */
-  label: string;
-}
 
 /** Where ids are looked up in one query; well under SQLite's bound-parameter limit. */
 const LOOKUP_CHUNK = 500;
-
-/**
- * Every file reference in a document, in reading order: image sources, and link targets that
- * are paths on this site under /files/. Words in the text that merely look like a file address
- * are not references, and neither are links to other hosts.
- */
-export function fileRefsInDoc(doc: PmNode): FileRef[] {
-  const refs: FileRef[] = [];
-  const add = (kind: FileRef['kind'], url: unknown, label: string) => {
-    if (typeof url !== 'string' || !url.startsWith('/files/')) return;
-    for (const fileId of fileIdsInDoc(JSON.stringify(url))) refs.push({ kind, fileId, url, label });
-  };
-  // Validated documents are shallow (see DOC_LIMITS), but a loop keeps this safe on any input.
-  const stack: PmNode[] = [doc];
-  while (stack.length) {
-    const node = stack.pop()!;
-    if (node.type === 'image') add('photo', node.attrs?.src, typeof node.attrs?.alt === 'string' ? node.attrs.alt : '');
-    for (const mark of node.marks ?? []) if (mark.type === 'link') add('link', mark.attrs?.href, node.text ?? '');
-    // Measured traces attached to EQ and crossover blocks are files the page shows too.
-    if (node.type === EQ_BLOCK || node.type === CROSSOVER_BLOCK) {
-      for (const t of blockTraces(node.attrs as { traces?: TraceRef[] })) {
-        if (typeof t?.fileId === 'string') refs.push({ kind: 'trace', fileId: t.fileId, url: `/files/${t.fileId}`, label: typeof t.label === 'string' ? t.label : '' });
-      }
-    }
-    if (node.content) for (let i = node.content.length - 1; i >= 0; i--) stack.push(node.content[i]);
-  }
-  return refs;
-}
 
 function quoted(label: string): string {
   const flat = label.replace(/\s+/g, ' ').trim();

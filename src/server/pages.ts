@@ -1,16 +1,17 @@
 import { and, eq, like, or } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
+import type { PageJson } from '~/lib/api-types';
 import type { PmNode } from '~/lib/doc/types';
 import type { PageCreate } from '~/lib/schemas/page';
 import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
-import { getDb, writeTx, type Tx } from './db';
+import { getDb, writeTx, type Reader, type Tx } from './db';
 import type { Action } from '~/lib/permissions';
 import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
-import { revisionJson } from './revision-json';
+import { FORMER_MEMBER, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
 
 const PAGE_NOT_FOUND = 'There is no such page in this venue.';
@@ -45,7 +46,7 @@ export async function loadPageWithCurrentText(venueId: string, pageSlug: string 
   return {
     page: row.page,
     section: { slug: row.sectionSlug, title: row.sectionTitle },
-    revision: row.revision ? { ...row.revision, authorName: row.authorName ?? 'a former member' } : null,
+    revision: row.revision ? { ...row.revision, authorName: row.authorName ?? FORMER_MEMBER } : null,
   };
 }
 
@@ -58,7 +59,7 @@ export async function loadPageWithCurrent(venueId: string, pageSlug: string | un
 export type LoadedPage = Awaited<ReturnType<typeof loadPageWithCurrent>>;
 
 /** The page as the JSON routes describe it (GET /api/venues/:venue/pages/:page). */
-export function pageJson(page: typeof pages.$inferSelect, section: { slug: string; title: string }) {
+export function pageJson(page: typeof pages.$inferSelect, section: { slug: string; title: string }): PageJson<Date> {
   return {
     id: page.id,
     slug: page.slug,
@@ -71,11 +72,18 @@ export function pageJson(page: typeof pages.$inferSelect, section: { slug: strin
   };
 }
 
-/** Just the page row, for routes that need its id (history, one revision). */
-export async function findPage(venueId: string, pageSlug: string | undefined) {
-  if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
-  const db = await getDb();
+export type PageRow = typeof pages.$inferSelect;
+
+/** The page of this venue with that slug, read through `db` (the database or a write's `tx`). */
+export async function pageBySlug(db: Reader, venueId: string, pageSlug: string | undefined): Promise<PageRow | undefined> {
+  if (!pageSlug || pageSlug.length > 100) return undefined;
   const [page] = await db.select().from(pages).where(and(eq(pages.venueId, venueId), eq(pages.slug, pageSlug))).limit(1);
+  return page;
+}
+
+/** Just the page row, for routes that need its id (history, one revision, a save); 404 when absent. */
+export async function findPage(venueId: string, pageSlug: string | undefined, db?: Reader): Promise<PageRow> {
+  const page = await pageBySlug(db ?? (await getDb()), venueId, pageSlug);
   if (!page) throw new HttpError(404, PAGE_NOT_FOUND);
   return page;
 }

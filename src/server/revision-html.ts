@@ -1,21 +1,32 @@
 import type { PmNode } from '~/lib/doc/types';
+import { fileIdsInDoc, fileRefsInDoc } from '~/lib/doc/file-refs';
 import { renderDocHtml } from '~/lib/doc/render-html';
-import { availableFileIds, fileIdOfUrl } from './files/available-files';
-import { fileIdsInDoc } from './files/file-usage';
-import { curveHrefFor, traceIdsInDocText } from './files/block-context';
+import { fileIdOfUrl } from '~/lib/file-url';
+import { availableFileIds } from './files/available-files';
+import { curveHrefFor } from './files/block-context';
 import { loadVenueTraces } from './files/trace-data';
 
 /**
  * The read view's body HTML, cached. A revision never changes after it is written, so its HTML
  * depends only on the revision id, the venue and page slugs (the curve download links), and on
- * which of the files it shows (photos, measured traces) can still be served; all
- * are read from the database on every request and form the key. A save or restore makes a new
+ * which of the files it shows (photos, measured traces) can still be served; the
+ * set of files it points at is found once per revision, their availability is read from the
+ * database on every request and must match the entry's. A save or restore makes a new
  * revision id, a deleted or vanished file changes the set: either misses the cache, in this
  * process or any other, so nothing stale is ever served. Entries are only an optimisation, and
  * bounded by total size (least recently used go first).
  */
 const MAX_CACHED_CHARS = 16 * 1024 * 1024;
-const cache = new Map<string, string>();
+
+interface Entry {
+  /** The files the revision points at, found once by the one definition (fileIdsInDoc). */
+  referenced: Set<string>;
+  /** Which of them were servable when `html` was rendered. */
+  availableKey: string;
+  html: string;
+}
+
+const cache = new Map<string, Entry>();
 let cachedChars = 0;
 
 export interface StoredRevision {
@@ -25,33 +36,44 @@ export interface StoredRevision {
 }
 
 export async function revisionHtml(venue: { id: string; slug: string }, pageSlug: string, revision: StoredRevision): Promise<string> {
-  const traceIds = traceIdsInDocText(revision.doc);
-  const referenced = new Set([...fileIdsInDoc(revision.doc), ...traceIds]);
-  const available = referenced.size ? await availableFileIds(venue.id, referenced) : new Set<string>();
-  const key = `${revision.id}|${venue.slug}/${pageSlug}|${[...available].sort().join(',')}`;
+  const venueId = venue.id;
+  const key = `${revision.id}|${venue.slug}/${pageSlug}`;
   const hit = cache.get(key);
-  if (hit !== undefined) {
+  let parsed: PmNode | undefined;
+  const referenced = hit?.referenced ?? fileIdsInDoc((parsed = JSON.parse(revision.doc) as PmNode));
+  const available = referenced.size ? await availableFileIds(venueId, referenced) : new Set<string>();
+  const availableKey = [...available].sort().join(',');
+  if (hit && hit.availableKey === availableKey) {
     // Re-inserting moves it to the young end of the Map's order.
-    cache.delete(key);
-    cache.set(key, hit);
-    return hit;
+    cache.delete(revision.id);
+    cache.set(revision.id, hit);
+    return hit.html;
   }
-  const traces = await loadVenueTraces(venue.id, [...traceIds].filter((id) => available.has(id)));
-  const html = renderDocHtml(JSON.parse(revision.doc) as PmNode, {
-    isImageAvailable: (src) => available.has(fileIdOfUrl(src)),
+  parsed ??= JSON.parse(revision.doc) as PmNode;
+  const traceIds = fileRefsInDoc(parsed).filter((f) => f.kind === 'trace' && available.has(f.fileId)).map((f) => f.fileId);
+  const traces = await loadVenueTraces(venueId, traceIds);
+  const html = renderDocHtml(parsed, {
+    isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''),
     blockContext: { traces, curveHref: curveHrefFor(venue.slug, pageSlug) },
   });
-  remember(key, html);
+  remember(key, { referenced, availableKey, html });
   return html;
 }
 
-function remember(key: string, html: string): void {
-  if (html.length > MAX_CACHED_CHARS / 8) return;
-  cache.set(key, html);
-  cachedChars += html.length + key.length;
-  for (const [oldKey, oldHtml] of cache) {
+const sizeOf = (id: string, e: Entry) => e.html.length + id.length + e.availableKey.length;
+
+function remember(id: string, entry: Entry): void {
+  const old = cache.get(id);
+  if (old) {
+    cache.delete(id);
+    cachedChars -= sizeOf(id, old);
+  }
+  if (entry.html.length > MAX_CACHED_CHARS / 8) return;
+  cache.set(id, entry);
+  cachedChars += sizeOf(id, entry);
+  for (const [oldId, oldEntry] of cache) {
     if (cachedChars <= MAX_CACHED_CHARS) break;
-    cache.delete(oldKey);
-    cachedChars -= oldHtml.length + oldKey.length;
+    cache.delete(oldId);
+    cachedChars -= sizeOf(oldId, oldEntry);
   }
 }

@@ -3,15 +3,14 @@ import { pages, revisions, sections, users } from '~/db/schema';
 import type { PmNode } from '~/lib/doc/types';
 import type { PageSave, RestoreRequest } from '~/lib/schemas/page';
 import { recordAudit } from './audit';
-import { getDb, writeTx, type Tx } from './db';
+import { getDb, writeTx, type Reader, type Tx } from './db';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
-import { pageJson, sectionInTx } from './pages';
+import { findPage, pageJson, sectionInTx, type PageRow } from './pages';
 import { authorJson, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
 
-const PAGE_NOT_FOUND = 'There is no such page in this venue.';
 /** Revisions per history page unless the caller asks for another size (1 to 500). */
 export const HISTORY_PAGE_SIZE = 100;
 export const HISTORY_MAX_PAGE_SIZE = 500;
@@ -22,15 +21,9 @@ export function revisionNumberParam(raw: string | undefined): number {
   return Number(raw);
 }
 
-async function pageInTx(tx: Tx, venueId: string, pageSlug: string | undefined) {
-  if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
-  const [page] = await tx.select().from(pages).where(and(eq(pages.venueId, venueId), eq(pages.slug, pageSlug))).limit(1);
-  if (!page) throw new HttpError(404, PAGE_NOT_FOUND);
-  return page;
-}
-
-async function revisionInTx(tx: Tx, pageId: string, number: number) {
-  const [row] = await tx
+/** Revision `number` of a page with its author's name, through `db` (the database or a write's `tx`). */
+async function revisionRow(db: Reader, pageId: string, number: number) {
+  const [row] = await db
     .select({ revision: revisions, authorName: users.name })
     .from(revisions)
     .leftJoin(users, eq(users.id, revisions.authorId))
@@ -40,8 +33,8 @@ async function revisionInTx(tx: Tx, pageId: string, number: number) {
 }
 
 /** The 409 answer: what the person's save was refused for, with the revision that won. */
-async function conflict(tx: Tx, page: typeof pages.$inferSelect, base: number): Promise<HttpError> {
-  const row = await revisionInTx(tx, page.id, page.currentRevision);
+async function conflict(tx: Tx, page: PageRow, base: number): Promise<HttpError> {
+  const row = await revisionRow(tx, page.id, page.currentRevision);
   const current = row
     ? revisionJson(row.revision, authorJson(row.revision.authorId, row.authorName), JSON.parse(row.revision.doc) as PmNode)
     : null;
@@ -55,7 +48,7 @@ async function conflict(tx: Tx, page: typeof pages.$inferSelect, base: number): 
 }
 
 interface Append {
-  page: typeof pages.$inferSelect;
+  page: PageRow;
   idempotencyKey?: string;
   doc: string;
   plainText: string;
@@ -84,7 +77,7 @@ async function appendRevision(tx: Tx, a: Append) {
 }
 
 /** The answer of a save: the page as it now is and the revision the save made. */
-async function saveAnswer(tx: Tx, page: typeof pages.$inferSelect, revision: typeof revisions.$inferSelect, author: { id: string | null; name: string | null }) {
+async function saveAnswer(tx: Tx, page: PageRow, revision: typeof revisions.$inferSelect, author: { id: string | null; name: string | null }) {
   const [sec] = await tx.select({ slug: sections.slug, title: sections.title }).from(sections).where(eq(sections.id, page.sectionId));
   return { page: pageJson(page, sec), revision: revisionJson(revision, authorJson(author.id, author.name)) };
 }
@@ -94,7 +87,7 @@ async function saveAnswer(tx: Tx, page: typeof pages.$inferSelect, revision: typ
  * dropped connection) gets that save's answer again instead of a 409 against itself. The key
  * belongs to one person and one text: anything else reusing it is refused.
  */
-async function replayed(tx: Tx, page: typeof pages.$inferSelect, key: string, doc: string, actor: SessionUser) {
+async function replayed(tx: Tx, page: PageRow, key: string, doc: string, actor: SessionUser) {
   const [row] = await tx
     .select({ revision: revisions, authorName: users.name })
     .from(revisions)
@@ -119,7 +112,7 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
   const docText = JSON.stringify(doc);
   const summary = input.summary ?? '';
   return writeTx(async (tx) => {
-    const current = await pageInTx(tx, venueId, pageSlug);
+    const current = await findPage(venueId, pageSlug, tx);
     if (idempotencyKey) {
       const earlier = await replayed(tx, current, idempotencyKey, docText, actor);
       if (earlier) return earlier;
@@ -161,9 +154,9 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
 /** A restore is a new revision with the text of revision n, marked as restored from it. */
 export async function restoreRevision(venueId: string, pageSlug: string | undefined, n: number, input: RestoreRequest, actor: SessionUser) {
   return writeTx(async (tx) => {
-    const current = await pageInTx(tx, venueId, pageSlug);
+    const current = await findPage(venueId, pageSlug, tx);
     if (input.baseRevision !== undefined && current.currentRevision !== input.baseRevision) throw await conflict(tx, current, input.baseRevision);
-    const old = await revisionInTx(tx, current.id, n);
+    const old = await revisionRow(tx, current.id, n);
     if (!old) throw new HttpError(404, `This page has no revision ${n}.`);
     if (n === current.currentRevision) throw new HttpError(400, `Revision ${n} is the current text already; there is nothing to restore.`);
     await assertOwnFileRefs(tx, venueId, JSON.parse(old.revision.doc) as PmNode, { restoring: n });
@@ -206,13 +199,7 @@ export async function listRevisions(pageId: string, opts: { before?: number; lim
 
 /** One revision with its document and plain text; 404 when the page has no such number. */
 export async function getRevision(pageId: string, number: number) {
-  const db = await getDb();
-  const [row] = await db
-    .select({ revision: revisions, authorName: users.name })
-    .from(revisions)
-    .leftJoin(users, eq(users.id, revisions.authorId))
-    .where(and(eq(revisions.pageId, pageId), eq(revisions.number, number)))
-    .limit(1);
+  const row = await revisionRow(await getDb(), pageId, number);
   if (!row) throw new HttpError(404, `This page has no revision ${number}.`);
   return revisionJson(row.revision, authorJson(row.revision.authorId, row.authorName), JSON.parse(row.revision.doc) as PmNode);
 }

@@ -88,7 +88,7 @@ describe('named hostile inputs', () => {
   });
 
   it('refuses −300 °C (and its °F twin), naming the range', async () => {
-    expect(await refuse('delay?distance=10&temp=-300', 'temp')).toMatch(/-60 °C to 60 °C/);
+    expect(await refuse('delay?distance=10&temp=-300', 'temp')).toMatch(/at least -60 °C and at most 60 °C/);
     expect(await refuse('align?main=30&fill=8&temp=-300&tempUnit=F', 'temp')).toMatch(/°F/);
   });
 

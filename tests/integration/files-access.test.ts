@@ -6,18 +6,8 @@ import { DEMO } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
 import { anonymous, signIn, type Client } from '../helpers/session';
 import { PDF_BYTES, plainJpeg, storedEntries, tempEntries } from './files-fixtures';
+import type { FileView } from '~/lib/schemas/file';
 
-interface FileView {
-  id: string;
-  url: string;
-  thumbUrl: string | null;
-  displayUrl: string | null;
-  caption: string;
-  sizeBytes: number;
-  originalName: string;
-  usedBy: { slug: string; title: string }[];
-  page: { slug: string } | null;
-}
 
 type Who = keyof typeof DEMO | 'signedOut';
 

@@ -23,22 +23,8 @@ import {
   tempEntries,
   truncatedJpeg,
 } from './files-fixtures';
+import type { FileView } from '~/lib/schemas/file';
 
-interface FileView {
-  id: string;
-  kind: string;
-  mime: string;
-  originalName: string;
-  caption: string;
-  sizeBytes: number;
-  width: number | null;
-  height: number | null;
-  url: string;
-  displayUrl: string | null;
-  thumbUrl: string | null;
-  page: { slug: string; title: string } | null;
-  usedBy: { slug: string; title: string }[];
-}
 
 let server: TestServer;
 const as: Record<keyof typeof DEMO, Client> = {} as never;

@@ -4,17 +4,13 @@ import { startServer, type TestServer } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
 import { PDF_BYTES, plainJpeg } from './files-fixtures';
 import { createTestPage, doc, getPage, para, snapshot, type Doc } from './pages-fixtures';
+import type { FileView } from '~/lib/schemas/file';
 
 /**
  * A page may show or link only to files of its own venue that exist: checked on create, save
  * and restore, inside the write, with one answer for "another venue's" and "no such file".
  */
 
-interface FileView {
-  id: string;
-  url: string;
-  displayUrl: string | null;
-}
 
 let server: TestServer;
 const as = {} as Record<'engineer' | 'viewer' | 'otherManager', Client>;
@@ -148,6 +144,26 @@ describe('restoring a revision whose photo is gone', () => {
     expect(await snapshot(server.dbPath, slug)).toEqual(before);
     // A revision without the photo restores as before.
     expect((await as.engineer.sendJson('POST', `/api/venues/${venue}/pages/${slug}/revisions/1/restore`, {})).status).toBe(201);
+  });
+});
+
+describe('which pages use a file', () => {
+  it('a page that only mentions the file’s address in its text is not listed; one that shows it is, and only it blocks a delete', async () => {
+    const file = await upload(as.engineer, venue);
+    const mention = await createTestPage(as.engineer, venue, 'Where the photos were', doc(para(`The old rack photo was at ${file.displayUrl} and /files/${file.id}.`)));
+    const shows = await createTestPage(as.engineer, venue, 'Rack photo', doc(photo(file.displayUrl!)));
+    const listed = async () => {
+      const { files } = (await (await as.viewer.fetch(`/api/venues/${venue}/files`)).json()) as { files: FileView[] };
+      return files.find((f) => f.id === file.id)!.usedBy.map((p) => p.slug);
+    };
+    expect(await listed()).toEqual([shows.page.slug]);
+    expect(mention.page.slug).not.toBe(shows.page.slug);
+
+    // Once the page that shows it stops doing so, nothing uses the file and a plain delete goes through.
+    expect((await put(shows.page.slug, { doc: doc(para('No photo yet.')), baseRevision: shows.revision.number })).status).toBe(200);
+    expect(await listed()).toEqual([]);
+    const deleted = await as.engineer.fetch(`/api/venues/${venue}/files/${file.id}`, { method: 'DELETE' });
+    expect(deleted.status).toBe(200);
   });
 });
 

@@ -1,15 +1,18 @@
 import { createClient } from '@libsql/client';
+import type { PageJson, RevisionWithDoc } from '~/lib/api-types';
+import type { PmNode } from '~/lib/doc/types';
 import type { Client } from '../helpers/session';
 
 /** Small builders and a read-only look into the server's database, shared by the page tests. */
-export type Doc = { type: string; attrs?: Record<string, unknown>; content?: Doc[]; text?: string; marks?: { type: string; attrs?: Record<string, unknown> }[] };
+export type Doc = PmNode;
 
 export const para = (text: string, marks?: Doc['marks']): Doc => ({ type: 'paragraph', content: [{ type: 'text', text, ...(marks ? { marks } : {}) }] });
 export const doc = (...content: Doc[]): Doc => ({ type: 'doc', content });
 
+/** GET answers a revision with its document; POST's revision carries it too. */
 export interface PageAnswer {
-  page: { slug: string; title: string; currentRevision: number; section: { slug: string } };
-  revision: { number: number; doc: Doc; summary: string; author: { id: string | null; name: string }; createdAt: string; restoredFrom: number | null; plainText?: string };
+  page: PageJson;
+  revision: RevisionWithDoc;
 }
 
 export async function getPage(client: Client, venue: string, page: string): Promise<PageAnswer> {

@@ -3,20 +3,13 @@ import { DEMO } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
 import { anonymous, signIn, type Client } from '../helpers/session';
 import { createTestPage, doc, para } from './pages-fixtures';
+import type { SearchHit as Hit } from '~/lib/api-types';
 
 let server: TestServer;
 const as: Record<keyof typeof DEMO, Client> = {} as never;
 let mainVenue: string;
 let otherVenue: string;
 
-interface Hit {
-  venue: { slug: string; name: string };
-  page: { slug: string; title: string };
-  url: string;
-  snippet: string;
-  snippetParts: { text: string; match: boolean }[];
-  titleParts: { text: string; match: boolean }[];
-}
 
 async function search(who: Client, q: string): Promise<{ status: number; hits: Hit[]; raw: string }> {
   const res = await who.fetch(`/api/search?q=${encodeURIComponent(q)}`);

@@ -1,11 +1,9 @@
 import { useState } from 'react';
+import { ApiError } from '~/components/api/client';
+import { getPage, listPages, putPage } from '~/components/api/pages';
+import { listMyVenues, type VenueListed as Venue } from '~/components/api/venues';
 import type { PmNode } from '~/lib/doc/types';
 
-interface Venue {
-  slug: string;
-  name: string;
-  role: string | null;
-}
 interface PageRow {
   slug: string;
   title: string;
@@ -27,10 +25,7 @@ interface Props {
 
 const EDITING_ROLES = ['engineer', 'manager'];
 
-async function getJson<T>(url: string): Promise<{ status: number; body: T }> {
-  const res = await fetch(url, { headers: { accept: 'application/json' } });
-  return { status: res.status, body: (await res.json().catch(() => ({}))) as T };
-}
+const UNREACHABLE = 'Could not reach Throwline; nothing was saved.';
 
 /**
  * "Save into a page": a signed-in engineer picks a venue and a page, and the result is appended
@@ -41,21 +36,20 @@ export default function SaveToPage({ build, testId }: Props) {
   const [step, setStep] = useState<Step>({ kind: 'closed' });
 
   async function loadPages(venues: Venue[], venue: string) {
-    const { body } = await getJson<{ pages?: PageRow[] }>(`/api/venues/${venue}/pages`);
-    const pages = body.pages ?? [];
+    // A list that cannot be loaded offers no page, as an empty venue would.
+    const pages: PageRow[] = await listPages(venue).catch(() => []);
     setStep({ kind: 'pick', venues, venue, pages, page: pages[0]?.slug ?? '' });
   }
 
   async function open() {
     setStep({ kind: 'loading' });
     try {
-      const { status, body } = await getJson<{ venues?: Venue[]; isAdmin?: boolean }>('/api/venues');
-      if (status === 401) return setStep({ kind: 'signed-out' });
-      const venues = (body.venues ?? []).filter((v) => v.role === null || EDITING_ROLES.includes(v.role));
+      const venues = (await listMyVenues()).filter((v) => v.role === null || EDITING_ROLES.includes(v.role));
       if (venues.length === 0) return setStep({ kind: 'error', message: 'You have no venue where you may edit pages.' });
       await loadPages(venues, venues[0]!.slug);
-    } catch {
-      setStep({ kind: 'error', message: 'Could not reach Throwline; nothing was saved.' });
+    } catch (err) {
+      if (err instanceof ApiError && err.status === 401) return setStep({ kind: 'signed-out' });
+      setStep({ kind: 'error', message: err instanceof ApiError && err.status !== 0 ? err.error : UNREACHABLE });
     }
   }
 
@@ -64,20 +58,15 @@ export default function SaveToPage({ build, testId }: Props) {
     if (!made) return setStep({ kind: 'error', message: 'Fix the values above first; nothing was saved.' });
     setStep({ kind: 'saving' });
     try {
-      const { status, body } = await getJson<{ revision?: { number: number; doc: PmNode }; error?: string }>(`/api/venues/${venue}/pages/${page}`);
-      if (status !== 200 || !body.revision) return setStep({ kind: 'error', message: body.error ?? `The server answered ${status}; nothing was saved.` });
-      const doc = { ...body.revision.doc, content: [...(body.revision.doc.content ?? []), ...made.nodes] };
-      const res = await fetch(`/api/venues/${venue}/pages/${page}`, {
-        method: 'PUT',
-        headers: { 'content-type': 'application/json', accept: 'application/json' },
-        body: JSON.stringify({ doc, baseRevision: body.revision.number, summary: made.summary }),
-      });
-      const answer = (await res.json().catch(() => ({}))) as { revision?: { number: number }; error?: string };
-      if (res.ok) return setStep({ kind: 'done', url: `/venues/${venue}/${page}`, title, revision: answer.revision?.number ?? 0 });
-      if (res.status === 409) return setStep({ kind: 'error', message: 'Someone saved that page a moment ago; nothing was saved. Press Save again to add it to the new version.' });
-      setStep({ kind: 'error', message: answer.error ?? `The server answered ${res.status}; nothing was saved.` });
-    } catch {
-      setStep({ kind: 'error', message: 'Could not reach Throwline; nothing was saved.' });
+      const { revision } = await getPage(venue, page);
+      if (!revision) return setStep({ kind: 'error', message: 'That page has no text yet; nothing was saved.' });
+      const doc = { ...revision.doc, content: [...(revision.doc.content ?? []), ...made.nodes] };
+      const answer = await putPage(venue, page, { doc, baseRevision: revision.number, summary: made.summary });
+      setStep({ kind: 'done', url: `/venues/${venue}/${page}`, title, revision: answer.revision.number });
+    } catch (err) {
+      if (!(err instanceof ApiError) || err.status === 0) return setStep({ kind: 'error', message: UNREACHABLE });
+      if (err.status === 409) return setStep({ kind: 'error', message: 'Someone saved that page a moment ago; nothing was saved. Press Save again to add it to the new version.' });
+      setStep({ kind: 'error', message: err.error });
     }
   }
 

@@ -1,9 +1,10 @@
 import { useEffect, useMemo, useRef } from 'react';
+import { formatDateTime } from '~/lib/format-date';
 import { renderDocHtml } from '~/lib/doc/render-html';
-import type { RevisionInfo } from './page-api';
+import type { CurrentRevision } from '~/components/api/pages';
 
 interface Props {
-  theirs: RevisionInfo;
+  theirs: CurrentRevision;
   /** True when this comes from a draft found on reload rather than a refused save. */
   fromDraft: boolean;
   busy: boolean;
@@ -12,8 +13,6 @@ interface Props {
   onCopyMine: () => void;
   copied: boolean;
 }
-
-const when = (iso: string) => new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(iso));
 
 /**
  * Shown when the page changed under the person's feet: the other version, rendered by the same
@@ -34,7 +33,7 @@ export function ConflictPanel({ theirs, fromDraft, busy, onKeepMine, onTakeTheir
         {fromDraft ? 'You have unsaved text from an older revision' : 'Someone else saved this page while you were editing'}
       </h2>
       <p className="mt-1 text-sm">
-        Revision {theirs.number} by {theirs.author.name}, {when(theirs.createdAt)}
+        Revision {theirs.number} by {theirs.author.name}, {formatDateTime(theirs.createdAt)}
         {theirs.summary && <> — “{theirs.summary}”</>}. Your text is safe in the editor and on this device. Compare the two, merge by hand if you like,
         then choose:
       </p>

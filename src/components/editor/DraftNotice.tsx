@@ -1,4 +1,5 @@
 import type { Draft } from './draft-store';
+import { formatDateTime } from '~/lib/format-date';
 
 interface Props {
   draft: Draft;
@@ -8,14 +9,12 @@ interface Props {
   onDiscard: () => void;
 }
 
-const when = (ms: number) => new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(ms));
-
 /** Offers unsaved text found on this device from an earlier visit to the editor. */
 export function DraftNotice({ draft, base, onRestore, onDiscard }: Props) {
   const stale = draft.base < base;
   return (
     <div role="alert" className="rounded-lg border border-accent bg-accent-soft p-3" data-testid="draft-notice">
-      <p className="font-semibold">Unsaved text from {when(draft.savedAt)} is kept on this device.</p>
+      <p className="font-semibold">Unsaved text from {formatDateTime(draft.savedAt)} is kept on this device.</p>
       {stale && (
         <p className="mt-1 text-sm">
           It was written on revision {draft.base}; the page has been saved since (now revision {base}). Bringing it back shows both versions side by side.

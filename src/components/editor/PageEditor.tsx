@@ -8,7 +8,7 @@ import { copyRich } from './copy-text';
 import { DraftNotice } from './DraftNotice';
 import { clearDrafts, NEW_PAGE_KEY, readDrafts, type Draft } from './draft-store';
 import { EditorToolbar } from './EditorToolbar';
-import { createPage, savePage, type RevisionInfo } from './page-api';
+import { createPage, savePage, type CurrentRevision } from '~/components/api/pages';
 import { PageFields } from './PageFields';
 import { SaveBar } from './SaveBar';
 import { useDraftAutosave } from './use-draft-autosave';
@@ -19,7 +19,7 @@ export interface PageEditorProps {
   /** Absent when creating a page. */
   page?: { slug: string; title: string; section: string };
   /** The revision the editor opens on (absent when creating). */
-  current?: RevisionInfo;
+  current?: CurrentRevision;
   /** Whether this person may upload photos (the page decides with `can()`); picking stored ones is always offered. */
   mayUpload?: boolean;
 }
@@ -35,7 +35,7 @@ export default function PageEditor({ venue, sections, page, current, mayUpload =
   const [section, setSection] = useState(page?.section ?? sections[0]?.slug ?? '');
   const [summary, setSummary] = useState('');
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
-  const [conflict, setConflict] = useState<{ theirs: RevisionInfo; fromDraft: boolean } | null>(null);
+  const [conflict, setConflict] = useState<{ theirs: CurrentRevision; fromDraft: boolean } | null>(null);
   const [offer, setOffer] = useState<Draft | null>(null);
   const [setAside, setSetAside] = useState<PmNode | null>(null);
   const [copied, setCopied] = useState(false);

@@ -1,3 +1,5 @@
+import { PAGE_TITLE_MAX } from '~/lib/text-limits';
+
 interface Props {
   isNew: boolean;
   title: string;
@@ -23,7 +25,7 @@ export function PageFields({ isNew, title, section, sections, venueSlug, error, 
           id="tl-page-title"
           value={title}
           onChange={(e) => onTitle(e.target.value)}
-          maxLength={140}
+          maxLength={PAGE_TITLE_MAX}
           required
           autoFocus={isNew}
           aria-invalid={titleError ? true : undefined}

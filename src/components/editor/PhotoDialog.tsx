@@ -1,10 +1,11 @@
 import type { Editor } from '@tiptap/react';
 import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
-import type { FileView } from '~/lib/schemas/file';
+import { fetcher, type ApiError } from '~/components/api/client';
+import { addToFiles, filesKey, type FilesAnswer } from '~/components/api/files';
 import { insertFile } from './insert-file';
 import { PhotoUpload } from './PhotoUpload';
-import { addToList, VenueFilePicker } from './VenueFilePicker';
+import { VenueFilePicker } from './VenueFilePicker';
 
 export interface PhotoTarget {
   venueSlug: string;
@@ -21,18 +22,11 @@ interface Props extends PhotoTarget {
   onClose: () => void;
 }
 
-async function fetchFiles(url: string): Promise<FileView[]> {
-  const res = await fetch(url, { headers: { accept: 'application/json' } });
-  const body = (await res.json().catch(() => ({}))) as { files?: FileView[]; error?: string };
-  if (!res.ok || !body.files) throw new Error(body.error ?? `The venue’s files could not be loaded (HTTP ${res.status}).`);
-  return body.files;
-}
-
 /** "Add a photo": a new one from this device, or one the venue already has, put in at the cursor. */
 export function PhotoDialog({ editor, venueSlug, pageSlug, mayUpload, atEnd, onClose }: Props) {
   const dialogRef = useRef<HTMLDialogElement>(null);
   const [added, setAdded] = useState(false);
-  const { data: files, error, mutate } = useSWR(`/api/venues/${encodeURIComponent(venueSlug)}/files`, fetchFiles, { revalidateOnFocus: false });
+  const { data, error, mutate } = useSWR<FilesAnswer, ApiError>(filesKey(venueSlug), fetcher, { revalidateOnFocus: false });
 
   useEffect(() => {
     const dialog = dialogRef.current;
@@ -71,7 +65,7 @@ export function PhotoDialog({ editor, venueSlug, pageSlug, mayUpload, atEnd, onC
             onStored={(file) => {
               insertFile(editor, file, atEnd);
               setAdded(true);
-              void addToList(mutate, file);
+              void addToFiles(mutate, file);
             }}
             onDone={onClose}
           />
@@ -82,8 +76,8 @@ export function PhotoDialog({ editor, venueSlug, pageSlug, mayUpload, atEnd, onC
           Already in this venue
         </h3>
         <VenueFilePicker
-          files={files}
-          error={error as Error | undefined}
+          files={data?.files}
+          error={error}
           onPick={(file) => {
             insertFile(editor, file, atEnd);
             onClose();

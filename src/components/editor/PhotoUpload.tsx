@@ -1,8 +1,9 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView } from '~/lib/schemas/file';
-import { UPLOAD_ACCEPT } from '~/lib/upload-limits';
+import { MAX_CAPTION_CHARS, UPLOAD_ACCEPT } from '~/lib/upload-limits';
 import { formatBytes } from '~/components/files/format-bytes';
-import { uploadFile, UploadError } from '~/components/files/upload-file';
+import { ApiError } from '~/components/api/client';
+import { uploadFile } from '~/components/api/upload-file';
 
 type Stage = 'empty' | 'ready' | 'sending' | 'processing' | 'done' | 'error';
 
@@ -73,7 +74,7 @@ export function PhotoUpload({ venueSlug, pageSlug, onStored, onDone }: Props) {
         return;
       }
       setStage('error');
-      setError(err instanceof UploadError ? err.message : 'The upload failed; try again.');
+      setError(err instanceof ApiError ? err.error : 'The upload failed; try again.');
     } finally {
       controller.current = null;
     }
@@ -127,7 +128,7 @@ export function PhotoUpload({ venueSlug, pageSlug, onStored, onDone }: Props) {
               id={captionId}
               type="text"
               value={caption}
-              maxLength={500}
+              maxLength={MAX_CAPTION_CHARS}
               disabled={busy || stage === 'done'}
               onChange={(e) => setCaption(e.currentTarget.value)}
               placeholder="e.g. Amp rack B, stage left"

@@ -1,3 +1,5 @@
+import { SUMMARY_MAX } from '~/lib/text-limits';
+
 interface Props {
   summary: string;
   onSummary: (summary: string) => void;
@@ -29,7 +31,7 @@ export function SaveBar({ summary, onSummary, onSave, saving, blocked, error, st
           <input
             id="tl-summary"
             value={summary}
-            maxLength={200}
+            maxLength={SUMMARY_MAX}
             onChange={(e) => onSummary(e.target.value)}
             placeholder={isNew ? 'First version' : 'e.g. New amp in rack B, patch updated'}
             className="mt-1 min-h-11 w-full rounded-md border border-line bg-bg px-3"

@@ -1,11 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
-
-export interface SectionRow {
-  slug: string;
-  title: string;
-  position: number;
-  pageCount: number;
-}
+import { ApiError } from '~/components/api/client';
+import { createSection, deleteSection, listSections, updateSection, type SectionRow } from '~/components/api/sections';
+import { SECTION_TITLE_MAX } from '~/lib/text-limits';
 
 interface Props {
   venue: string;
@@ -20,28 +16,18 @@ export default function SectionManager({ venue, initial }: Props) {
   const [editing, setEditing] = useState<{ slug: string; title: string } | null>(null);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
-  const api = `/api/venues/${venue}/sections`;
 
-  async function call(method: string, url: string, body?: unknown, done?: string) {
+  /** Runs one change, then reloads the list so positions and counts are the server's. */
+  async function call(change: () => Promise<void>, done?: string) {
     setBusy(true);
     setMessage(null);
     try {
-      const res = await fetch(url, {
-        method,
-        headers: body ? { 'content-type': 'application/json', accept: 'application/json' } : { accept: 'application/json' },
-        body: body ? JSON.stringify(body) : undefined,
-      });
-      const answer = res.status === 204 ? {} : await res.json().catch(() => ({}));
-      if (!res.ok) {
-        setMessage({ ok: false, text: answer.error ?? `The server answered ${res.status}.` });
-        return false;
-      }
-      const list = await (await fetch(api, { headers: { accept: 'application/json' } })).json();
-      setSections(list.sections);
+      await change();
+      setSections(await listSections(venue));
       if (done) setMessage({ ok: true, text: done });
       return true;
-    } catch {
-      setMessage({ ok: false, text: 'Could not reach Throwline; nothing changed. Try again.' });
+    } catch (err) {
+      setMessage({ ok: false, text: err instanceof ApiError ? err.error : 'Something went wrong; nothing changed. Try again.' });
       return false;
     } finally {
       setBusy(false);
@@ -50,12 +36,12 @@ export default function SectionManager({ venue, initial }: Props) {
 
   async function add(e: FormEvent) {
     e.preventDefault();
-    if (await call('POST', api, { title: newTitle }, `Added “${newTitle.trim()}”.`)) setNewTitle('');
+    if (await call(() => createSection(venue, newTitle), `Added “${newTitle.trim()}”.`)) setNewTitle('');
   }
 
   async function rename(e: FormEvent) {
     e.preventDefault();
-    if (editing && (await call('PATCH', `${api}/${editing.slug}`, { title: editing.title }, 'Renamed.'))) setEditing(null);
+    if (editing && (await call(() => updateSection(venue, editing.slug, { title: editing.title }), 'Renamed.'))) setEditing(null);
   }
 
   const button = 'min-h-11 min-w-11 rounded-md border border-line px-3 text-sm hover:bg-sunken disabled:opacity-40';
@@ -74,7 +60,7 @@ export default function SectionManager({ venue, initial }: Props) {
                   <input
                     autoFocus
                     value={editing.title}
-                    maxLength={60}
+                    maxLength={SECTION_TITLE_MAX}
                     onChange={(e) => setEditing({ slug: s.slug, title: e.target.value })}
                     className="mt-1 block min-h-11 w-full rounded-md border border-line bg-bg px-3 font-normal"
                   />
@@ -94,10 +80,10 @@ export default function SectionManager({ venue, initial }: Props) {
                     {s.pageCount} page{s.pageCount === 1 ? '' : 's'}
                   </span>
                 </span>
-                <button type="button" className={button} disabled={busy || i === 0} aria-label={`Move ${s.title} up`} onClick={() => call('PATCH', `${api}/${s.slug}`, { move: 'up' })}>
+                <button type="button" className={button} disabled={busy || i === 0} aria-label={`Move ${s.title} up`} onClick={() => call(() => updateSection(venue, s.slug, { move: 'up' }))}>
                   ↑
                 </button>
-                <button type="button" className={button} disabled={busy || i === sections.length - 1} aria-label={`Move ${s.title} down`} onClick={() => call('PATCH', `${api}/${s.slug}`, { move: 'down' })}>
+                <button type="button" className={button} disabled={busy || i === sections.length - 1} aria-label={`Move ${s.title} down`} onClick={() => call(() => updateSection(venue, s.slug, { move: 'down' }))}>
                   ↓
                 </button>
                 <button type="button" className={button} disabled={busy} onClick={() => setEditing({ slug: s.slug, title: s.title })}>
@@ -108,7 +94,7 @@ export default function SectionManager({ venue, initial }: Props) {
                   className={button}
                   disabled={busy || s.pageCount > 0}
                   title={s.pageCount > 0 ? 'Move its pages to another section first' : undefined}
-                  onClick={() => call('DELETE', `${api}/${s.slug}`, undefined, `Removed “${s.title}”.`)}
+                  onClick={() => call(() => deleteSection(venue, s.slug), `Removed “${s.title}”.`)}
                 >
                   Remove
                 </button>
@@ -125,7 +111,7 @@ export default function SectionManager({ venue, initial }: Props) {
           <input
             id={`${id}-new`}
             value={newTitle}
-            maxLength={60}
+            maxLength={SECTION_TITLE_MAX}
             required
             onChange={(e) => setNewTitle(e.target.value)}
             placeholder="e.g. Backline"

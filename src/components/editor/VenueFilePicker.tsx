@@ -1,9 +1,9 @@
-import type { KeyedMutator } from 'swr';
+import type { ApiError } from '~/components/api/client';
 import type { FileView } from '~/lib/schemas/file';
 
 interface Props {
   files: FileView[] | undefined;
-  error: Error | undefined;
+  error: ApiError | undefined;
   onPick: (file: FileView) => void;
 }
 
@@ -12,7 +12,7 @@ export function VenueFilePicker({ files, error, onPick }: Props) {
   if (error) {
     return (
       <p role="alert" className="text-sm text-danger">
-        {error.message}
+        {error.error}
       </p>
     );
   }
@@ -46,9 +46,4 @@ export function VenueFilePicker({ files, error, onPick }: Props) {
       })}
     </ul>
   );
-}
-
-/** Puts a freshly stored file at the head of the cached list, so it shows up without a refetch. */
-export function addToList(mutate: KeyedMutator<FileView[]>, file: FileView) {
-  return mutate((list = []) => [file, ...list.filter((f) => f.id !== file.id)], { revalidate: false });
 }

@@ -54,5 +54,5 @@ export function useDraftAutosave(editor: Editor | null, venue: string, pageKey: 
     clearTimeout(timer.current);
   }, []);
 
-  return { touch, flush, settle, storageFailed, isDirty: () => dirty.current };
+  return { touch, flush, settle, storageFailed };
 }

@@ -1,15 +1,17 @@
 import { useEffect, useRef, useState } from 'react';
+import { ApiError } from '~/components/api/client';
+import { deleteFile } from '~/components/api/files';
 import type { FileView, PageRef } from '~/lib/schemas/file';
 
 interface Props {
   file: FileView;
-  apiUrl: string;
+  venueSlug: string;
   onClose: () => void;
   onDeleted: () => void;
 }
 
 /** Asks before deleting, naming every page that shows the file; the server checks again. */
-export function ConfirmDelete({ file, apiUrl, onClose, onDeleted }: Props) {
+export function ConfirmDelete({ file, venueSlug, onClose, onDeleted }: Props) {
   const dialogRef = useRef<HTMLDialogElement>(null);
   const [usedBy, setUsedBy] = useState<PageRef[]>(file.usedBy);
   const [error, setError] = useState<string | null>(null);
@@ -25,19 +27,17 @@ export function ConfirmDelete({ file, apiUrl, onClose, onDeleted }: Props) {
     setWorking(true);
     setError(null);
     try {
-      const res = await fetch(`${apiUrl}${usedBy.length ? '?confirm=1' : ''}`, { method: 'DELETE' });
-      const body = (await res.json().catch(() => ({}))) as { error?: string; usedBy?: PageRef[] };
-      if (res.status === 409 && body.usedBy) {
+      const result = await deleteFile(venueSlug, file.id, usedBy.length > 0);
+      if (result.kind === 'in-use') {
         // A page started using the file since the list was loaded: show the names and ask again.
-        setUsedBy(body.usedBy);
-        setError(body.error ?? null);
+        setUsedBy(result.usedBy);
+        setError(result.message);
         return;
       }
-      if (!res.ok) throw new Error(body.error ?? `The file was not deleted (HTTP ${res.status}).`);
       onClose();
       onDeleted();
     } catch (err) {
-      setError(err instanceof Error ? err.message : 'The file was not deleted.');
+      setError(err instanceof ApiError ? err.error : 'The file was not deleted.');
     } finally {
       setWorking(false);
     }

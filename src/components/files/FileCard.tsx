@@ -1,5 +1,8 @@
 import { useId, useState } from 'react';
+import { ApiError } from '~/components/api/client';
+import { saveCaption as sendCaption } from '~/components/api/files';
 import type { FileView } from '~/lib/schemas/file';
+import { MAX_CAPTION_CHARS } from '~/lib/upload-limits';
 import { ConfirmDelete } from './ConfirmDelete';
 import { formatBytes } from './format-bytes';
 
@@ -19,20 +22,16 @@ export function FileCard({ file, venueSlug, mayEdit, mayDelete, onChanged, onDel
   const [error, setError] = useState<string | null>(null);
   const [confirming, setConfirming] = useState(false);
   const captionId = useId();
-  const apiUrl = `/api/venues/${encodeURIComponent(venueSlug)}/files/${encodeURIComponent(file.id)}`;
 
   async function saveCaption(event: React.FormEvent) {
     event.preventDefault();
     setSaving(true);
     setError(null);
     try {
-      const res = await fetch(apiUrl, { method: 'PATCH', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ caption: draft }) });
-      const body = (await res.json().catch(() => ({}))) as { file?: FileView; error?: string };
-      if (!res.ok || !body.file) throw new Error(body.error ?? `The caption was not saved (HTTP ${res.status}).`);
-      onChanged(body.file);
+      onChanged(await sendCaption(venueSlug, file.id, draft));
       setEditing(false);
     } catch (err) {
-      setError(err instanceof Error ? err.message : 'The caption was not saved.');
+      setError(err instanceof ApiError ? err.error : 'The caption was not saved.');
     } finally {
       setSaving(false);
     }
@@ -56,7 +55,7 @@ export function FileCard({ file, venueSlug, mayEdit, mayDelete, onChanged, onDel
             <label htmlFor={captionId} className="text-xs text-muted">
               Caption
             </label>
-            <textarea id={captionId} value={draft} maxLength={500} rows={2} onChange={(e) => setDraft(e.currentTarget.value)} className="w-full rounded-md border border-line bg-bg p-2" autoFocus />
+            <textarea id={captionId} value={draft} maxLength={MAX_CAPTION_CHARS} rows={2} onChange={(e) => setDraft(e.currentTarget.value)} className="w-full rounded-md border border-line bg-bg p-2" autoFocus />
             <div className="flex gap-2">
               <button type="submit" disabled={saving} className="min-h-11 rounded-lg bg-accent px-3 font-semibold text-accent-fg disabled:opacity-50">
                 {saving ? 'Saving…' : 'Save caption'}
@@ -112,7 +111,7 @@ export function FileCard({ file, venueSlug, mayEdit, mayDelete, onChanged, onDel
           </div>
         )}
       </div>
-      {confirming && <ConfirmDelete file={file} apiUrl={apiUrl} onClose={() => setConfirming(false)} onDeleted={onDeleted} />}
+      {confirming && <ConfirmDelete file={file} venueSlug={venueSlug} onClose={() => setConfirming(false)} onDeleted={onDeleted} />}
     </li>
   );
 }

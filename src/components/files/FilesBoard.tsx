@@ -1,4 +1,6 @@
 import useSWR from 'swr';
+import { fetcher, type ApiError } from '~/components/api/client';
+import { addToFiles, filesKey, type FilesAnswer } from '~/components/api/files';
 import type { FileView, PageRef } from '~/lib/schemas/file';
 import { FileCard } from './FileCard';
 import { Uploader } from './Uploader';
@@ -11,16 +13,11 @@ interface Props {
   mayDelete: boolean;
 }
 
-async function fetchFiles(url: string): Promise<FileView[]> {
-  const res = await fetch(url, { headers: { accept: 'application/json' } });
-  if (!res.ok) throw new Error(`The file list could not be loaded (HTTP ${res.status}).`);
-  return ((await res.json()) as { files: FileView[] }).files;
-}
-
 /** The venue's photos and files: an uploader for those who may, then the grid. */
 export default function FilesBoard({ venueSlug, initialFiles, pages, mayUpload, mayDelete }: Props) {
-  const key = `/api/venues/${encodeURIComponent(venueSlug)}/files`;
-  const { data: files = initialFiles, mutate, error } = useSWR(key, fetchFiles, { fallbackData: initialFiles, revalidateOnMount: false });
+  const { data, mutate, error } = useSWR<FilesAnswer, ApiError>(filesKey(venueSlug), fetcher, { fallbackData: { files: initialFiles }, revalidateOnMount: false });
+  const files = data?.files ?? initialFiles;
+  const change = (edit: (list: FileView[]) => FileView[]) => mutate((answer) => ({ files: edit(answer?.files ?? []) }), { revalidate: false });
 
   return (
     <div className="space-y-8">
@@ -29,7 +26,7 @@ export default function FilesBoard({ venueSlug, initialFiles, pages, mayUpload, 
           <h2 id="upload-heading" className="mb-3 text-lg font-semibold">
             Add photos and files
           </h2>
-          <Uploader venueSlug={venueSlug} pages={pages} onUploaded={(file) => mutate((list = []) => [file, ...list.filter((f) => f.id !== file.id)], { revalidate: false })} />
+          <Uploader venueSlug={venueSlug} pages={pages} onUploaded={(file) => addToFiles(mutate, file)} />
         </section>
       )}
       <section aria-labelledby="files-heading">
@@ -38,7 +35,7 @@ export default function FilesBoard({ venueSlug, initialFiles, pages, mayUpload, 
         </h2>
         {error && (
           <p className="mb-3 text-sm text-danger" role="alert">
-            {String(error.message ?? error)}
+            {error.error}
           </p>
         )}
         {files.length === 0 ? (
@@ -52,8 +49,8 @@ export default function FilesBoard({ venueSlug, initialFiles, pages, mayUpload, 
                 venueSlug={venueSlug}
                 mayEdit={mayUpload}
                 mayDelete={mayDelete}
-                onChanged={(next) => mutate((list = []) => list.map((f) => (f.id === next.id ? next : f)), { revalidate: false })}
-                onDeleted={() => mutate((list = []) => list.filter((f) => f.id !== file.id), { revalidate: false })}
+                onChanged={(next) => change((list) => list.map((f) => (f.id === next.id ? next : f)))}
+                onDeleted={() => change((list) => list.filter((f) => f.id !== file.id))}
               />
             ))}
           </ul>

@@ -1,6 +1,7 @@
 import { useId } from 'react';
 import type { FileView } from '~/lib/schemas/file';
 import { formatBytes } from './format-bytes';
+import { MAX_CAPTION_CHARS } from '~/lib/upload-limits';
 
 export interface QueuedUpload {
   key: number;
@@ -65,7 +66,7 @@ export function UploadRow({ item, busy, onCaption, onRemove }: Props) {
         id={captionId}
         type="text"
         value={item.caption}
-        maxLength={500}
+        maxLength={MAX_CAPTION_CHARS}
         placeholder="Caption, e.g. “Amp rack, stage left”"
         disabled={!editable || busy}
         onChange={(e) => onCaption(e.currentTarget.value)}

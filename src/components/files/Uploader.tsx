@@ -2,19 +2,15 @@ import { useEffect, useId, useRef, useState } from 'react';
 import type { FileView, PageRef } from '~/lib/schemas/file';
 import { UPLOAD_ACCEPT_WITH_TRACES, uploadPrecheck } from '~/lib/upload-limits';
 import { UploadRow, type QueuedUpload } from './UploadRow';
-import { uploadFile, UploadError } from './upload-file';
+import { ApiError } from '~/components/api/client';
+import { uploadFile } from '~/components/api/upload-file';
 
 export interface UploaderProps {
   venueSlug: string;
-  /** Slug of the page the files are for; when absent and `pages` is given, the person may pick one. */
-  page?: string;
+  /** The venue's pages; the person may say which one the files are for. */
   pages?: PageRef[];
   /** Called once per stored file, in the order they finish. */
   onUploaded?: (file: FileView) => void;
-  /** One file at a time (e.g. "insert a photo" in the editor). */
-  single?: boolean;
-  /** Text of the pick button. */
-  pickLabel?: string;
 }
 
 let nextKey = 1;
@@ -23,7 +19,7 @@ let nextKey = 1;
  * Choose several photos or PDFs (a phone offers its camera roll and camera), give each a
  * caption, and send them one after another, each with its own progress bar.
  */
-export function Uploader({ venueSlug, page, pages, onUploaded, single = false, pickLabel }: UploaderProps) {
+export function Uploader({ venueSlug, pages, onUploaded }: UploaderProps) {
   const [queue, setQueue] = useState<QueuedUpload[]>([]);
   const [pagePick, setPagePick] = useState('');
   const [busy, setBusy] = useState(false);
@@ -38,8 +34,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
 
   function add(fileList: FileList | null) {
     if (!fileList?.length) return;
-    const picked = Array.from(fileList).slice(0, single ? 1 : undefined);
-    const added = picked.map<QueuedUpload>((file) => {
+    const added = Array.from(fileList).map<QueuedUpload>((file) => {
       const refusal = uploadPrecheck(file);
       return {
       key: nextKey++,
@@ -52,10 +47,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
       preview: !refusal && file.type.startsWith('image/') && !/heic|heif/i.test(file.type) ? URL.createObjectURL(file) : null,
       };
     });
-    setQueue((list) => {
-      if (single) list.forEach((q) => q.preview && URL.revokeObjectURL(q.preview));
-      return single ? added : [...list.filter((q) => q.status !== 'done'), ...added];
-    });
+    setQueue((list) => [...list.filter((q) => q.status !== 'done'), ...added]);
     if (inputRef.current) inputRef.current.value = '';
   }
 
@@ -73,13 +65,13 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
     for (const item of queueRef.current.filter((q) => q.status === 'ready' || q.status === 'error')) {
       update(item.key, { status: 'sending', progress: 0, error: undefined });
       try {
-        const { file } = await uploadFile(venueSlug, item.file, { caption: item.caption.trim(), page: page ?? (pagePick || undefined) }, (fraction) =>
+        const { file } = await uploadFile(venueSlug, item.file, { caption: item.caption.trim(), page: pagePick || undefined }, (fraction) =>
           update(item.key, { progress: fraction, status: fraction >= 1 ? 'processing' : 'sending' }),
         );
         update(item.key, { status: 'done', result: file });
         onUploaded?.(file);
       } catch (err) {
-        update(item.key, { status: 'error', error: err instanceof UploadError ? err.message : 'The upload failed; try again.' });
+        update(item.key, { status: 'error', error: err instanceof ApiError ? err.error : 'The upload failed; try again.' });
       }
     }
     setBusy(false);
@@ -94,7 +86,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
           id={inputId}
           type="file"
           accept={UPLOAD_ACCEPT_WITH_TRACES}
-          multiple={!single}
+          multiple
           className="peer sr-only"
           onChange={(e) => add(e.currentTarget.files)}
           data-testid="file-input"
@@ -103,7 +95,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
           htmlFor={inputId}
           className="inline-flex min-h-11 cursor-pointer items-center rounded-lg border border-line bg-surface px-4 py-2 font-semibold hover:bg-sunken peer-focus-visible:outline-3 peer-focus-visible:outline-focus"
         >
-          {pickLabel ?? (single ? 'Choose a photo or PDF' : 'Choose photos or PDFs')}
+          Choose photos or PDFs
         </label>
         <span className="text-sm text-muted">JPEG, PNG, WebP, PDF, or a measurement trace as text columns; up to 25 MiB each (an iPhone's HEIC photos: share them as JPEG). Location data is removed from photos.</span>
       </div>
@@ -116,7 +108,7 @@ export function Uploader({ venueSlug, page, pages, onUploaded, single = false, p
             ))}
           </ul>
           <div className="flex flex-wrap items-end gap-3">
-            {!page && pages && pages.length > 0 && (
+            {pages && pages.length > 0 && (
               <label className="flex flex-col text-sm">
                 <span className="text-muted">For page (optional)</span>
                 <select value={pagePick} onChange={(e) => setPagePick(e.currentTarget.value)} disabled={busy} className="min-h-11 rounded-lg border border-line bg-surface px-3">

@@ -1,14 +1,15 @@
 import { useMemo, useState } from 'react';
 import useSWR from 'swr';
 import { diffStats, foldUnchanged, wordDiff } from '~/lib/doc/word-diff';
+import { fetcher, type ApiError } from '~/components/api/client';
+import { revisionKey, type RevisionAnswer } from '~/components/api/revisions';
 import { docPlainText } from '~/lib/doc/render-html';
 import { structuralDiff } from '~/lib/doc/structural-diff';
 import { StructuralChanges } from './StructuralChanges';
-import { fetchJson } from './fetch-json';
-import type { RevisionFull } from './types';
 
 interface Props {
-  base: string;
+  venue: string;
+  page: string;
   older: number;
   newer: number;
 }
@@ -17,9 +18,9 @@ interface Props {
  * The word-level difference between two revisions' text. Parts are rendered as React text, so
  * whatever a page contains is shown, never interpreted.
  */
-export function DiffView({ base, older, newer }: Props) {
-  const a = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${older}`, fetchJson);
-  const b = useSWR<{ revision: RevisionFull }>(`${base}/revisions/${newer}`, fetchJson);
+export function DiffView({ venue, page, older, newer }: Props) {
+  const a = useSWR<RevisionAnswer, ApiError>(revisionKey(venue, page, older), fetcher);
+  const b = useSWR<RevisionAnswer, ApiError>(revisionKey(venue, page, newer), fetcher);
   const [whole, setWhole] = useState(false);
   // Text from the documents themselves, so blocks saved before their words were indexed still compare.
   const texts = useMemo(
@@ -31,7 +32,7 @@ export function DiffView({ base, older, newer }: Props) {
     () => (a.data && b.data && texts ? structuralDiff(a.data.revision.doc, b.data.revision.doc, texts[0] !== texts[1]) : []),
     [a.data, b.data, texts],
   );
-  if (a.error || b.error) return <p className="text-danger">{(a.error ?? b.error).message}</p>;
+  if (a.error || b.error) return <p className="text-danger">{(a.error ?? b.error)?.error}</p>;
   if (!parts) return <p className="text-muted">Comparing…</p>;
   const stats = diffStats(parts);
   const changed = stats.added + stats.removed > 0;

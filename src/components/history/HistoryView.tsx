@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import useSWR from 'swr';
+import { ApiError, fetcher } from '~/components/api/client';
+import { historyKey, restoreRevision, type HistoryAnswer } from '~/components/api/revisions';
 import { DiffView } from './DiffView';
-import { fetchJson } from './fetch-json';
 import { RevisionList } from './RevisionList';
 import { useOlderRevisions } from './use-older-revisions';
-import type { HistoryAnswer } from './types';
 
 export interface HistoryViewProps {
   venue: string;
@@ -20,9 +20,8 @@ type Message = { kind: 'ok' | 'error'; text: string } | null;
 
 /** A page's history: pick two revisions, read the word-level diff, restore an old one. */
 export default function HistoryView({ venue, page, mayRestore, initial, before = null }: HistoryViewProps) {
-  const base = `/api/venues/${venue}/pages/${page}`;
-  const { data, error, mutate } = useSWR<HistoryAnswer>(`${base}/revisions${before ? `?before=${before}` : ''}`, fetchJson, { fallbackData: initial });
-  const older = useOlderRevisions(base, data?.nextBefore ?? null);
+  const { data, error, mutate } = useSWR<HistoryAnswer, ApiError>(historyKey(venue, page, before), fetcher, { fallbackData: initial });
+  const older = useOlderRevisions(venue, page, data?.nextBefore ?? null);
   const revisions = older.after(data?.revisions ?? []);
   const current = data?.page.currentRevision ?? 0;
   const [pair, setPair] = useState<{ older: number; newer: number } | null>(current > 1 ? { older: current - 1, newer: current } : null);
@@ -33,20 +32,11 @@ export default function HistoryView({ venue, page, mayRestore, initial, before =
     setRestoring(n);
     setMessage(null);
     try {
-      const res = await fetch(`${base}/revisions/${n}/restore`, {
-        method: 'POST',
-        headers: { 'content-type': 'application/json', accept: 'application/json' },
-        body: JSON.stringify({ baseRevision: current }),
-      });
-      const body = await res.json().catch(() => ({}));
-      if (res.ok) {
-        setMessage({ kind: 'ok', text: `Revision ${n} is the current text again, saved as revision ${body.revision.number}.` });
-        setPair({ older: current, newer: body.revision.number });
-      } else {
-        setMessage({ kind: 'error', text: body.error ?? `The server answered ${res.status}.` });
-      }
-    } catch {
-      setMessage({ kind: 'error', text: 'Could not reach Throwline; nothing was restored. Try again.' });
+      const { revision } = await restoreRevision(venue, page, n, current);
+      setMessage({ kind: 'ok', text: `Revision ${n} is the current text again, saved as revision ${revision.number}.` });
+      setPair({ older: current, newer: revision.number });
+    } catch (err) {
+      setMessage({ kind: 'error', text: err instanceof ApiError ? err.error : 'Nothing was restored. Try again.' });
     }
     setRestoring(null);
     await mutate();
@@ -66,7 +56,7 @@ export default function HistoryView({ venue, page, mayRestore, initial, before =
             {message.text}
           </p>
         )}
-        {error && <p className="text-danger">{error.message}</p>}
+        {error && <p className="text-danger">{error.error}</p>}
       </div>
       {revisions.length > 1 && (
         <section aria-labelledby="tl-compare">
@@ -98,7 +88,7 @@ export default function HistoryView({ venue, page, mayRestore, initial, before =
             </label>
           </div>
           {/* Room reserved for the comparison, so the revision list below does not jump when it loads. */}
-          <div className="mt-3 min-h-[min(70vh,32rem)]">{pair && <DiffView base={base} older={pair.older} newer={pair.newer} />}</div>
+          <div className="mt-3 min-h-[min(70vh,32rem)]">{pair && <DiffView venue={venue} page={page} older={pair.older} newer={pair.newer} />}</div>
         </section>
       )}
       <section aria-labelledby="tl-revisions">

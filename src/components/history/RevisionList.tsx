@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import type { RevisionSummary } from './types';
+import { formatDateTime } from '~/lib/format-date';
+import type { RevisionSummary } from '~/lib/api-types';
 import type { OlderRevisions } from './use-older-revisions';
 
 interface Props {
@@ -11,8 +12,6 @@ interface Props {
   onRestore: (n: number) => void;
   older: OlderRevisions;
 }
-
-const when = (iso: string) => new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(iso));
 
 /**
  * The revisions loaded so far, newest first, with compare and (for those who may edit) restore,
@@ -32,7 +31,7 @@ export function RevisionList({ revisions, current, mayRestore, restoring, onComp
               {r.restoredFrom !== null && <span className="ml-2 text-xs font-normal text-muted">restored from {r.restoredFrom}</span>}
             </p>
             <p className="text-sm text-muted">
-              {r.author.name} · <time dateTime={r.createdAt}>{when(r.createdAt)}</time>
+              {r.author.name} · <time dateTime={r.createdAt}>{formatDateTime(r.createdAt)}</time>
             </p>
             {r.summary && <p className="mt-0.5 text-sm">“{r.summary}”</p>}
           </div>

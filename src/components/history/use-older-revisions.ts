@@ -1,6 +1,7 @@
 import { useCallback, useRef, useState } from 'react';
-import { fetchJson } from './fetch-json';
-import type { HistoryAnswer, RevisionSummary } from './types';
+import { ApiError, request } from '~/components/api/client';
+import { historyKey } from '~/components/api/revisions';
+import type { HistoryAnswer, RevisionSummary } from '~/lib/api-types';
 
 export interface OlderRevisions {
   /** The first page's revisions followed by the older ones loaded so far, each number once. */
@@ -16,7 +17,7 @@ export interface OlderRevisions {
  * Older pages of a history, fetched one at a time on request. The newest page stays with SWR
  * (it changes on every save); older pages do not change, so they are kept as loaded.
  */
-export function useOlderRevisions(base: string, firstNextBefore: number | null): OlderRevisions {
+export function useOlderRevisions(venue: string, page: string, firstNextBefore: number | null): OlderRevisions {
   const [loaded, setLoaded] = useState<RevisionSummary[]>([]);
   const [cursor, setCursor] = useState<number | null | undefined>(undefined);
   const [loading, setLoading] = useState(false);
@@ -30,14 +31,14 @@ export function useOlderRevisions(base: string, firstNextBefore: number | null):
     if (nextBefore === null || loading) return;
     setLoading(true);
     setError(null);
-    fetchJson<HistoryAnswer>(`${base}/revisions?before=${nextBefore}`)
+    request<HistoryAnswer>(historyKey(venue, page, nextBefore))
       .then((answer) => {
         setLoaded((prev) => [...prev, ...answer.revisions]);
         setCursor(answer.nextBefore);
       })
-      .catch((err: Error) => setError(err.message))
+      .catch((err: unknown) => setError(err instanceof ApiError ? err.error : 'Could not load older revisions. Try again.'))
       .finally(() => setLoading(false));
-  }, [base, nextBefore, loading]);
+  }, [venue, page, nextBefore, loading]);
 
   const after = (first: RevisionSummary[]) => {
     for (const r of [...loaded, ...first]) seen.current.set(r.number, r);

@@ -1,7 +1,8 @@
 import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { ROLES } from '~/lib/permissions';
 import { createdAt, id } from './columns';
 import { users } from './users';
-import { ROLES, venues } from './venues';
+import { venues } from './venues';
 
 /**
  * A link that lets a touring crew read one venue's advance sheet without an account. Only the

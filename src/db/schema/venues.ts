@@ -1,4 +1,5 @@
 import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { ROLES } from '~/lib/permissions';
 import { createdAt, id } from './columns';
 import { users } from './users';
 
@@ -12,8 +13,6 @@ export const venues = sqliteTable('venues', {
   createdAt: createdAt(),
 });
 
-export const ROLES = ['manager', 'engineer', 'viewer'] as const;
-
 export const memberships = sqliteTable(
   'memberships',
   {
@@ -23,6 +22,7 @@ export const memberships = sqliteTable(
     userId: text('user_id')
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
+    // Exactly the roles the permission policy knows.
     role: text('role', { enum: ROLES }).notNull(),
     /** The previous visit's start, kept for "changed since your last visit". */
     lastVisitAt: integer('last_visit_at', { mode: 'timestamp_ms' }),

@@ -36,6 +36,20 @@ export interface RangeOptions {
   hint?: string;
 }
 
+/**
+ * "The temperature must be at least -60 °C and at most 60 °C; got -300 °C." — or undefined when
+ * `n` is inside. The one sentence for a number out of range, for the math and the route schemas.
+ */
+export function rangeMessage(n: number, range: NumericRange, label: string, unit = '', options: RangeOptions = {}): string | undefined {
+  const tooLow = options.minExclusive ? n <= range.min : n < range.min;
+  const tooHigh = options.maxExclusive ? n >= range.max : n > range.max;
+  if (!tooLow && !tooHigh) return undefined;
+  const low = `${options.minExclusive ? 'above' : 'at least'} ${withUnit(formatNumber(range.min), unit)}`;
+  const high = `${options.maxExclusive ? 'below' : 'at most'} ${withUnit(formatNumber(range.max), unit)}`;
+  const hint = options.hint ? ` ${options.hint}` : '';
+  return `${label} must be ${low} and ${high}; got ${withUnit(formatNumber(n), unit)}.${hint}`;
+}
+
 /** Refuses a number outside `range`, naming the range and the unit in the message. */
 export function requireInRange(
   value: unknown,
@@ -45,14 +59,8 @@ export function requireInRange(
   options: RangeOptions = {},
 ): number {
   const n = requireFinite(value, label, unit);
-  const tooLow = options.minExclusive ? n <= range.min : n < range.min;
-  const tooHigh = options.maxExclusive ? n >= range.max : n > range.max;
-  if (tooLow || tooHigh) {
-    const low = `${options.minExclusive ? 'above' : 'at least'} ${withUnit(formatNumber(range.min), unit)}`;
-    const high = `${options.maxExclusive ? 'below' : 'at most'} ${withUnit(formatNumber(range.max), unit)}`;
-    const hint = options.hint ? ` ${options.hint}` : '';
-    throw new RangeError(`${label} must be ${low} and ${high}; got ${withUnit(formatNumber(n), unit)}.${hint}`);
-  }
+  const message = rangeMessage(n, range, label, unit, options);
+  if (message) throw new RangeError(message);
   return n;
 }
 

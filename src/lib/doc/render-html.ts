@@ -1,3 +1,4 @@
+import { NODE_ATTR_RULES } from './attr-rules';
 import { escapeHtml } from './escape-html';
 import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
@@ -5,9 +6,11 @@ import { blockPlainText, processorBlockRenderers, type BlockContext } from './re
 
 /**
  * Renders a stored page document to HTML for the read view, on the server, with no editor code.
- * Only known node and mark types produce markup; every text and attribute is escaped, and links
- * and images are checked again here even though the save route already vetted them, so a row
- * written by an older version can never put script on a page.
+ * Only known node and mark types produce markup; every text and attribute is escaped, and every
+ * attribute is checked again with the same rules the save route applies (attr-rules.ts), so a row
+ * written by an older version can never put script on a page. Whatever the validator accepts is
+ * rendered with the meaning the editor gives it; render-html.golden.test.ts holds the two together
+ * against the editor's own HTML.
  */
 export type BlockRenderer = (node: PmNode) => string;
 
@@ -47,9 +50,36 @@ function clampInt(value: unknown, min: number, max: number, fallback: number): n
   return Number.isInteger(n) && n >= min && n <= max ? n : fallback;
 }
 
+/** The stored value when the save route's rule for it accepts it, else nothing. */
+function accepted(node: PmNode, name: string): unknown {
+  const value = node.attrs?.[name];
+  if (value === null || value === undefined) return undefined;
+  const rule = NODE_ATTR_RULES[node.type]?.[name];
+  return rule && rule.check(value) ? value : undefined;
+}
+
+/** Tailwind's reset takes the numbering away from every list, so each style is named in CSS. */
+const LIST_STYLE_CLASS: Record<string, string> = { a: 'list-lower-alpha', A: 'list-upper-alpha', i: 'list-lower-roman', I: 'list-upper-roman' };
+
+/** External links open apart from the book and pass nothing to the other site, as the editor sets them. */
+const EXTERNAL_LINK = ' target="_blank" rel="noopener noreferrer nofollow"';
+
+/**
+ * The order the document schema ranks marks in (see the golden test, which checks it against the
+ * schema): the editor always nests them this way, first outermost, whatever order was stored.
+ */
+export const MARK_ORDER = ['link', 'bold', 'code', 'italic', 'strike', 'underline'];
+
+const markRank = (mark: PmMark) => {
+  const i = MARK_ORDER.indexOf(mark.type);
+  return i < 0 ? MARK_ORDER.length : i;
+};
+
 function renderMarks(text: string, marks: PmMark[] | undefined): string {
   let html = escapeHtml(text);
-  for (const mark of marks ?? []) {
+  // Innermost first: wrap from the lowest-ranked mark outwards.
+  const inner = [...(marks ?? [])].sort((a, b) => markRank(b) - markRank(a));
+  for (const mark of inner) {
     switch (mark.type) {
       case 'bold':
         html = `<strong>${html}</strong>`;
@@ -70,8 +100,11 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
         const href = mark.attrs?.href;
         const kind = linkKind(href);
         if (kind) {
-          const external = kind === 'external';
-          html = `<a${attr('href', href as string)}${external ? ' rel="noopener noreferrer nofollow" target="_blank"' : ''}>${html}</a>`;
+          // Only web links open a new tab; mailto: and tel: hand over to another program anyway.
+          const external = kind === 'external' && /^https?:/i.test((href as string).trim());
+          const title = mark.attrs?.title;
+          const titled = typeof title === 'string' && title && title.length <= 500 ? attr('title', title) : '';
+          html = `<a${external ? EXTERNAL_LINK : ''}${attr('href', href as string)}${titled}>${html}</a>`;
         }
         break;
       }
@@ -118,17 +151,23 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
       return [`<h${level}>`, `</h${level}>`];
     }
     case 'orderedList': {
-      const start = clampInt(node.attrs?.start, 1, 100000, 1);
-      return [start === 1 ? '<ol>' : `<ol${attr('start', start)}>`, '</ol>'];
+      const start = (accepted(node, 'start') as number | undefined) ?? 1;
+      const type = accepted(node, 'type') as string | undefined;
+      const style = type ? LIST_STYLE_CLASS[type] : undefined;
+      return [`<ol${start === 1 ? '' : attr('start', start)}${type && type !== '1' ? attr('type', type) : ''}${style ? attr('class', style) : ''}>`, '</ol>'];
     }
     case 'taskList':
       return ['<ul data-type="taskList">', '</ul>'];
     case 'taskItem': {
       const checked = node.attrs?.checked === true;
-      return [`<li data-checked="${checked}"><span aria-hidden="true">${checked ? '☑' : '☐'}</span> `, '</li>'];
+      // A mark to read, not a control: the read view changes nothing. Its name carries the state.
+      const mark = `<span class="task-mark" role="img" aria-label="${checked ? 'done' : 'not done'}">${checked ? '☑' : '☐'}</span>`;
+      return [`<li data-checked="${checked}" data-type="taskItem">${mark}<div>`, '</div></li>'];
     }
-    case 'codeBlock':
-      return ['<pre><code>', '</code></pre>'];
+    case 'codeBlock': {
+      const language = accepted(node, 'language') as string | undefined;
+      return [`<pre><code${language ? attr('class', `language-${language}`) : ''}>`, '</code></pre>'];
+    }
     case 'horizontalRule':
       return ['<hr/>', ''];
     case 'hardBreak':
@@ -140,7 +179,9 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
       const tag = node.type === 'tableHeader' ? 'th' : 'td';
       const colspan = clampInt(node.attrs?.colspan, 1, 50, 1);
       const rowspan = clampInt(node.attrs?.rowspan, 1, 500, 1);
-      return [`<${tag}${colspan > 1 ? attr('colspan', colspan) : ''}${rowspan > 1 ? attr('rowspan', rowspan) : ''}>`, `</${tag}>`];
+      const align = accepted(node, 'align') as string | undefined;
+      // Column widths are an editing aid; the read view lets tables fit the screen instead.
+      return [`<${tag}${colspan > 1 ? attr('colspan', colspan) : ''}${rowspan > 1 ? attr('rowspan', rowspan) : ''}${align ? attr('style', `text-align: ${align};`) : ''}>`, `</${tag}>`];
     }
     case 'image': {
       const src = node.attrs?.src;
@@ -150,7 +191,10 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
         return [`<span class="missing-photo" role="note">Photo removed${alt ? `: ${escapeHtml(alt)}` : ''}</span>`, ''];
       }
       const title = typeof node.attrs?.title === 'string' ? node.attrs.title : '';
-      return [`<img${attr('src', options.imageUrl ? options.imageUrl(src) : src)}${attr('alt', alt)}${title ? attr('title', title) : ''} loading="lazy"/>`, ''];
+      const width = accepted(node, 'width');
+      const height = accepted(node, 'height');
+      const size = `${width ? attr('width', width as number) : ''}${height ? attr('height', height as number) : ''}`;
+      return [`<img${attr('src', options.imageUrl ? options.imageUrl(src) : src)}${attr('alt', alt)}${title ? attr('title', title) : ''}${size} loading="lazy"/>`, ''];
     }
     default:
       // Unknown nodes keep their text but lose their markup.
@@ -158,24 +202,49 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
   }
 }
 
-/** The document's words, for search and for the word-level diff. */
+const BLOCK_BREAK = new Set(['paragraph', 'heading', 'listItem', 'taskItem', 'tableRow', 'codeBlock', 'blockquote']);
+/** Between the cells of a row in plain text, so a patch-list row reads as one line. */
+export const CELL_SEPARATOR = ' | ';
+const LEAVE_CELL = { leave: 'cell' } as const;
+
+/**
+ * The document's words, for search and for the word-level diff: one block a line, a table row a
+ * line with its cells apart (their paragraphs do not break the row).
+ */
 export function docPlainText(doc: PmNode): string {
   const parts: string[] = [];
-  const stack: PmNode[] = [doc];
-  const BLOCK_BREAK = new Set(['paragraph', 'heading', 'listItem', 'taskItem', 'tableRow', 'codeBlock', 'blockquote']);
+  // Iterative, like the renderer; strings on the stack are written as they are.
+  const stack: (PmNode | string | typeof LEAVE_CELL)[] = [doc];
+  let inCell = 0;
   while (stack.length) {
-    const node = stack.pop()!;
+    const item = stack.pop()!;
+    if (typeof item === 'string') {
+      parts.push(item);
+      continue;
+    }
+    if ('leave' in item) {
+      inCell--;
+      continue;
+    }
+    const node = item;
     if (node.type === 'text') {
       parts.push(node.text ?? '');
       continue;
     }
-    if (node.type === 'hardBreak') parts.push('\n');
+    const lineBreak = inCell > 0 ? ' ' : '\n';
+    if (node.type === 'hardBreak') parts.push(lineBreak);
     const block = blockPlainText(node);
-    if (block) parts.push(`\n${block}\n`);
-    if (node.type === 'tableCell' || node.type === 'tableHeader') parts.push(' ');
-    if (BLOCK_BREAK.has(node.type)) parts.push('\n');
+    if (block) parts.push(`${lineBreak}${block}${lineBreak}`);
+    if (BLOCK_BREAK.has(node.type)) parts.push(node.type === 'tableRow' ? '\n' : lineBreak);
+    if (node.type === 'tableCell' || node.type === 'tableHeader') {
+      inCell++;
+      stack.push(LEAVE_CELL);
+    }
     const children = node.content ?? [];
-    for (let i = children.length - 1; i >= 0; i--) stack.push(children[i]);
+    for (let i = children.length - 1; i >= 0; i--) {
+      stack.push(children[i]);
+      if (node.type === 'tableRow' && i > 0) stack.push(CELL_SEPARATOR);
+    }
   }
-  return parts.join('').replace(/[ \t]+/g, ' ').replace(/\n\s*\n+/g, '\n').trim();
+  return parts.join('').replace(/[ \t]+/g, ' ').replace(/ ?\n\s*/g, '\n').trim();
 }

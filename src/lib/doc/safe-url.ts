@@ -39,7 +39,4 @@ export function isSafeLinkHref(href: unknown): href is string {
   return linkKind(href) !== null;
 }
 
-/** Images may only come from this instance's own file route. */
-export function isOwnFileUrl(src: unknown): src is string {
-  return typeof src === 'string' && /^\/files\/[A-Za-z0-9_-]{1,80}(\/(display|thumb|original))?$/.test(src);
-}
+export { isOwnFileUrl } from '~/lib/file-url';

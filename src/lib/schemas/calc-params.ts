@@ -4,7 +4,7 @@
  * names the parameter and shows a working example.
  */
 import { z } from 'zod';
-import { formatNumber } from '~/lib/acoustics/guards';
+import { rangeMessage } from '~/lib/acoustics/guards';
 import { MAX_NUMBER_CHARS, parseDecimal, parseDecimalOrFraction, type NumberProblem } from './decimal';
 
 export { MAX_NUMBER_CHARS, parseDecimal, type NumberProblem };
@@ -49,20 +49,9 @@ export interface Bounds {
   maxExclusive?: boolean;
 }
 
-function withUnit(n: number, unit: string): string {
-  const text = formatNumber(n);
-  return unit ? `${text} ${unit}` : text;
-}
-
-/** "temp must be from -60 to 60 °C; got -300 °C." — or undefined when `value` is inside. */
+/** "temp must be at least -60 °C and at most 60 °C; got -300 °C." — or undefined when `value` is inside. */
 export function outOfRange(value: number, bounds: Bounds, name: string, unit: string, hint = ''): string | undefined {
-  const low = bounds.minExclusive ? value <= bounds.min : value < bounds.min;
-  const high = bounds.maxExclusive ? value >= bounds.max : value > bounds.max;
-  if (!low && !high) return undefined;
-  const from = `${bounds.minExclusive ? 'above' : 'at least'} ${withUnit(bounds.min, unit)}`;
-  const to = `${bounds.maxExclusive ? 'below' : 'at most'} ${withUnit(bounds.max, unit)}`;
-  const range = bounds.minExclusive || bounds.maxExclusive ? `${from} and ${to}` : `from ${withUnit(bounds.min, unit)} to ${withUnit(bounds.max, unit)}`;
-  return `${name} must be ${range}; got ${withUnit(value, unit)}.${hint ? ` ${hint}` : ''}`;
+  return rangeMessage(value, bounds, name, unit, { minExclusive: bounds.minExclusive, maxExclusive: bounds.maxExclusive, hint: hint || undefined });
 }
 
 /** Adds an issue at path [name] when `value` is outside `bounds`; true when it was inside. `label` names it in the sentence. */

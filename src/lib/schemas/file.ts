@@ -22,8 +22,7 @@ export type FileUploadFields = z.infer<typeof FileUploadFieldsSchema>;
 export const FileCaptionSchema = z.object({ caption }).strict();
 export type FileCaption = z.infer<typeof FileCaptionSchema>;
 
-export const FILE_VARIANTS = ['original', 'display', 'thumb'] as const;
-export type FileVariant = (typeof FILE_VARIANTS)[number];
+export { FILE_VARIANTS, type FileVariant } from '~/lib/file-url';
 
 export interface PageRef {
   slug: string;

@@ -1,6 +1,9 @@
 import { z } from 'zod';
 import { SLUG_PATTERN } from '~/lib/slug';
+import { PAGE_TITLE_MAX, SEARCH_MAX_LENGTH, SECTION_TITLE_MAX, SLUG_MAX, SUMMARY_MAX } from '~/lib/text-limits';
 import { displayText } from './display-text';
+
+export { SEARCH_MAX_LENGTH };
 
 /**
  * Request bodies for pages, revisions, sections and search, shared by the editor island and the
@@ -20,17 +23,17 @@ function strictBody<T extends z.core.$ZodLooseShape>(shape: T) {
   });
 }
 
-const title = displayText('the title', { min: 1, max: 140, minMessage: 'Give the page a title.' });
+const title = displayText('the title', { min: 1, max: PAGE_TITLE_MAX, minMessage: 'Give the page a title.' });
 
 const summary = z
   .string({ error: 'The summary must be text.' })
   .refine((s) => !/[\r\n]/.test(s), 'Keep the summary to one line.')
-  .pipe(displayText('the summary', { max: 200, maxMessage: 'Keep the summary to one line (under 200 characters).' }));
+  .pipe(displayText('the summary', { max: SUMMARY_MAX, maxMessage: `Keep the summary to one line (under ${SUMMARY_MAX} characters).` }));
 
 const sectionSlug = z
   .string({ error: 'Choose a section.' })
   .min(1, 'Choose a section.')
-  .max(60, 'Choose one of the sections of this venue.');
+  .max(SLUG_MAX, 'Choose one of the sections of this venue.');
 
 const revisionNumber = z
   .number({ error: 'Say which revision you started from: baseRevision must be a number.' })
@@ -47,7 +50,7 @@ export const PageCreateSchema = strictBody({
   slug: z
     .string({ error: 'The slug must be text.' })
     .regex(SLUG_PATTERN, 'The slug may use only lower-case letters, digits and single hyphens, e.g. "stage-patch".')
-    .max(60, 'Keep the slug under 60 characters.')
+    .max(SLUG_MAX, `Keep the slug under ${SLUG_MAX} characters.`)
     .optional(),
 });
 export type PageCreate = z.infer<typeof PageCreateSchema>;
@@ -67,8 +70,6 @@ export const RestoreSchema = strictBody({
 });
 export type RestoreRequest = z.infer<typeof RestoreSchema>;
 
-export const SEARCH_MAX_LENGTH = 200;
-
 /** Query parameters, so other keys are ignored rather than refused. */
 export const SearchQuerySchema = z.object({
   q: z
@@ -82,14 +83,14 @@ export const SearchQuerySchema = z.object({
     .optional(),
 });
 
-const sectionTitle = displayText('the section title', { min: 1, max: 60, minMessage: 'Give the section a title.' });
+const sectionTitle = displayText('the section title', { min: 1, max: SECTION_TITLE_MAX, minMessage: 'Give the section a title.' });
 
 export const SectionCreateSchema = strictBody({
   title: sectionTitle,
   slug: z
     .string({ error: 'The slug must be text.' })
     .regex(SLUG_PATTERN, 'The slug may use only lower-case letters, digits and single hyphens, e.g. "backline".')
-    .max(60, 'Keep the slug under 60 characters.')
+    .max(SLUG_MAX, `Keep the slug under ${SLUG_MAX} characters.`)
     .optional(),
 });
 export type SectionCreate = z.infer<typeof SectionCreateSchema>;

@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { SearchAnswer } from '~/lib/api-types';
 import { SearchQuerySchema } from '~/lib/schemas/page';
 import { requireUser } from '~/server/guard';
 import { handle, json, parseWith, searchParamsObject } from '~/server/http';
@@ -10,5 +11,5 @@ export const GET: APIRoute = ({ locals, url }) =>
     const user = requireUser(locals.principal);
     const { q, limit } = parseWith(SearchQuerySchema, searchParamsObject(url));
     const hits = await searchPages(user, q, limit);
-    return json({ q, hits });
+    return json<SearchAnswer<Date>>({ q, hits });
   });

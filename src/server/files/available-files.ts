@@ -14,7 +14,3 @@ export async function availableFileIds(venueId: string, ids: Iterable<string>): 
   return new Set(rows.map((r) => r.id));
 }
 
-/** The file id inside a `/files/<id>[/variant]` address. */
-export function fileIdOfUrl(src: string): string {
-  return src.split('/')[2] ?? '';
-}

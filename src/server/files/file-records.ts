@@ -1,19 +1,19 @@
 import { and, desc, eq, or } from 'drizzle-orm';
+import { isFileId } from '~/lib/file-url';
 import { rm } from 'node:fs/promises';
 import { files, pages, users } from '~/db/schema';
 import type { FileView, PageRef } from '~/lib/schemas/file';
 import { recordAudit } from '~/server/audit';
-import { getDb, writeTx, type Tx } from '~/server/db';
+import { getDb, writeTx, type Reader, type Tx } from '~/server/db';
 import { HttpError } from '~/server/http';
 import type { SessionUser } from '~/server/session';
-import { fileUsage, type Reader } from './file-usage';
+import { fileUsage } from './file-usage';
 import { ensureStorageReady } from './storage-sweep';
 import { storedPath } from './storage-paths';
 
 export type FileRow = typeof files.$inferSelect;
 
 export const FILE_NOT_FOUND = 'There is no such file, or you may not see it.';
-const FILE_ID = /^[A-Za-z0-9_-]{1,80}$/;
 
 export function toFileView(row: FileRow, extra: { page: PageRef | null; usedBy: PageRef[]; uploadedBy: string | null }): FileView {
   const isImage = row.mime.startsWith('image/');
@@ -63,14 +63,14 @@ export async function listVenueFiles(venueId: string): Promise<FileView[]> {
 }
 
 export async function loadVenueFile(venueId: string, fileId: string | undefined): Promise<FileView> {
-  if (!fileId || !FILE_ID.test(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
+  if (!isFileId(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
   const [view] = await selectViews(await getDb(), venueId, fileId);
   if (!view) throw new HttpError(404, FILE_NOT_FOUND);
   return view;
 }
 
 async function lockedRow(tx: Tx, venueId: string, fileId: string | undefined): Promise<FileRow> {
-  if (!fileId || !FILE_ID.test(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
+  if (!isFileId(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
   const [row] = await tx.select().from(files).where(and(eq(files.venueId, venueId), eq(files.id, fileId))).limit(1);
   if (!row) throw new HttpError(404, FILE_NOT_FOUND);
   return row;

@@ -1,23 +1,15 @@
 import { and, eq, like } from 'drizzle-orm';
-import type { ResultSet } from '@libsql/client';
-import type { BaseSQLiteDatabase } from 'drizzle-orm/sqlite-core';
 import { pages, revisions } from '~/db/schema';
-import type * as schema from '~/db/schema';
+import { fileIdsInDoc } from '~/lib/doc/file-refs';
+import type { PmNode } from '~/lib/doc/types';
 import type { PageRef } from '~/lib/schemas/file';
+import type { Reader } from '~/server/db';
 
-/** The database or a transaction: reads that must also work inside `writeTx`. */
-export type Reader = BaseSQLiteDatabase<'async', ResultSet, typeof schema>;
-
-const FILE_URL = /\/files\/([A-Za-z0-9_-]{1,80})(?=[/"?#\s\\]|$)/g;
-
-/** Ids of this instance's files that a stored document points at (images and links alike). */
-export function fileIdsInDoc(docJson: string): Set<string> {
-  const ids = new Set<string>();
-  for (const match of docJson.matchAll(FILE_URL)) ids.add(match[1]);
-  return ids;
-}
-
-/** For each file id of a venue, the pages whose current revision uses it, in page-title order. */
+/**
+ * For each file id of a venue, the pages whose current revision shows or links to it, in
+ * page-title order. "Uses" is fileRefsInDoc's: a page whose text only mentions an address is not
+ * listed. The LIKE only narrows the rows read; the document decides.
+ */
 export async function fileUsage(db: Reader, venueId: string): Promise<Map<string, PageRef[]>> {
   const rows = await db
     .select({ slug: pages.slug, title: pages.title, doc: revisions.doc })
@@ -27,7 +19,7 @@ export async function fileUsage(db: Reader, venueId: string): Promise<Map<string
     .orderBy(pages.title);
   const usage = new Map<string, PageRef[]>();
   for (const row of rows) {
-    for (const id of fileIdsInDoc(row.doc)) {
+    for (const id of fileIdsInDoc(JSON.parse(row.doc) as PmNode)) {
       const list = usage.get(id) ?? [];
       list.push({ slug: row.slug, title: row.title });
       usage.set(id, list);

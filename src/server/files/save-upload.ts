@@ -1,13 +1,13 @@
 import { createHash } from 'node:crypto';
 import { rm } from 'node:fs/promises';
-import { and, eq } from 'drizzle-orm';
-import { files, pages } from '~/db/schema';
+import { files } from '~/db/schema';
 import { cleanDisplayName, withExtension } from '~/lib/file-name';
 import { FileUploadFieldsSchema, type FileView } from '~/lib/schemas/file';
 import { recordAudit } from '~/server/audit';
 import { getDb, writeTx } from '~/server/db';
 import type { VenueRow } from '~/server/guard';
 import { HttpError, parseWith } from '~/server/http';
+import { pageBySlug } from '~/server/pages';
 import type { SessionUser } from '~/server/session';
 import { fsyncFile, publish, writeDurably } from './durable-write';
 import { loadVenueFile } from './file-records';
@@ -79,8 +79,7 @@ export async function saveUpload(request: Request, venue: VenueRow, actor: Sessi
 }
 
 async function findPageId(venueId: string, slug: string): Promise<string> {
-  const db = await getDb();
-  const [page] = await db.select({ id: pages.id }).from(pages).where(and(eq(pages.venueId, venueId), eq(pages.slug, slug))).limit(1);
+  const page = await pageBySlug(await getDb(), venueId, slug);
   if (!page) throw new HttpError(400, `This venue has no page "${slug}"; choose one of its pages or none.`, 'page');
   return page.id;
 }

@@ -3,6 +3,7 @@ import { Readable } from 'node:stream';
 import { eq } from 'drizzle-orm';
 import { files, venues } from '~/db/schema';
 import { withExtension } from '~/lib/file-name';
+import { isFileId } from '~/lib/file-url';
 import { FILE_VARIANTS, type FileVariant } from '~/lib/schemas/file';
 import { getDb } from '~/server/db';
 import { isGuest, type Guest } from '~/lib/permissions';
@@ -15,15 +16,13 @@ import { FILE_NOT_FOUND, type FileRow } from './file-records';
 import { ensureStorageReady } from './storage-sweep';
 import { storedPath } from './storage-paths';
 
-const FILE_ID = /^[A-Za-z0-9_-]{1,80}$/;
-
 /**
  * The file row, for people who may read its venue. A file of a venue the person is not a member
  * of answers exactly like a file that does not exist.
  */
 export async function loadReadableFile(principal: RequestPrincipal, fileId: string | undefined): Promise<FileRow> {
   const signedIn: SessionUser | Guest = isGuest(principal) ? principal : requireUser(principal);
-  if (!fileId || !FILE_ID.test(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
+  if (!isFileId(fileId)) throw new HttpError(404, FILE_NOT_FOUND);
   const db = await getDb();
   const [found] = await db.select({ file: files, venueSlug: venues.slug }).from(files).innerJoin(venues, eq(venues.id, files.venueId)).where(eq(files.id, fileId)).limit(1);
   if (!found) throw new HttpError(404, FILE_NOT_FOUND);

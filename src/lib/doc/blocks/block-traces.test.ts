@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { processorBlockProblem } from '~/lib/schemas/processor-blocks';
 import { renderDocHtml } from '~/lib/doc/render-html';
-import { fileRefsInDoc } from '~/server/page-file-refs';
+import { fileRefsInDoc } from '~/lib/doc/file-refs';
 import { newEqBlock, newTraceRef, type EqBlockAttrs } from './block-data';
 import { blockCurveText } from './block-curve-text';
 import { parseTrace } from '~/lib/traces/parse-trace';

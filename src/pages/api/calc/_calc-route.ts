@@ -5,18 +5,14 @@
  */
 import type { APIRoute } from 'astro';
 import type { z } from 'zod';
-import { HttpError, handle, json, searchParamsObject } from '~/server/http';
+import { HttpError, handle, json, parseWith, searchParamsObject } from '~/server/http';
 
 /** Pure answers: a shared cache may keep them briefly. */
 const CACHEABLE = { 'cache-control': 'public, max-age=300' };
 
 /** The first schema issue as the answer, without rewording: every calculator message names its parameter. */
 export function parseCalc<S extends z.ZodType>(schema: S, input: unknown): z.infer<S> {
-  const result = schema.safeParse(input);
-  if (result.success) return result.data;
-  const issue = result.error.issues[0];
-  const field = issue?.path.length ? issue.path.map(String).join('.') : undefined;
-  throw new HttpError(400, issue?.message ?? 'The request is not valid.', field);
+  return parseWith(schema, input, { asWritten: true });
 }
 
 /** Runs the math; its RangeErrors become 400s with their own message. */

@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { VenueCreated } from '~/lib/api-types';
 import { VenueCreateSchema } from '~/lib/schemas/venue';
 import { requirePermission, requireUser } from '~/server/guard';
 import { handle, json, parseWith, readJsonBody } from '~/server/http';
@@ -17,5 +18,5 @@ export const POST: APIRoute = ({ locals, request }) =>
     requirePermission(user, 'venue.create');
     const input = parseWith(VenueCreateSchema, await readJsonBody(request));
     const venue = await createVenue(input, user);
-    return json({ venue }, 201);
+    return json<VenueCreated>({ venue }, 201);
   });

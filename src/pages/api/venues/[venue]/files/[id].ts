@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { FileAnswer, FileDeleted } from '~/lib/api-types';
 import { FileCaptionSchema } from '~/lib/schemas/file';
 import { deleteFile, loadVenueFile, updateCaption } from '~/server/files/file-records';
 import { guardVenue } from '~/server/guard';
@@ -7,7 +8,7 @@ import { handle, json, parseWith, readJsonBody } from '~/server/http';
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
     const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
-    return json({ file: await loadVenueFile(venue.id, params.id) });
+    return json<FileAnswer>({ file: await loadVenueFile(venue.id, params.id) });
   });
 
 /** `{caption}`: whoever may upload may caption. */
@@ -16,7 +17,7 @@ export const PATCH: APIRoute = ({ locals, params, request }) =>
     const { venue, user } = await guardVenue(locals.principal, params.venue, 'file.upload');
     await loadVenueFile(venue.id, params.id);
     const { caption } = parseWith(FileCaptionSchema, await readJsonBody(request));
-    return json({ file: await updateCaption(venue.id, params.id, caption, user) });
+    return json<FileAnswer>({ file: await updateCaption(venue.id, params.id, caption, user) });
   });
 
 /** A file that a page shows answers 409 with `usedBy` unless `?confirm=1` is given. */
@@ -25,5 +26,6 @@ export const DELETE: APIRoute = ({ locals, params, url }) =>
     const { venue, user } = await guardVenue(locals.principal, params.venue, 'file.delete');
     const confirmed = url.searchParams.get('confirm') === '1';
     const { usedBy } = await deleteFile(venue.id, params.id, user, confirmed);
-    return json({ deleted: params.id, usedBy });
+    // deleteFile answered 404 for a missing id, so params.id is set here.
+    return json<FileDeleted>({ deleted: params.id ?? '', usedBy });
   });

@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { PageSaved } from '~/lib/api-types';
 import { PageCreateSchema } from '~/lib/schemas/page';
 import { guardVenue } from '~/server/guard';
 import { handle, json, parseWith, readJsonBody } from '~/server/http';
@@ -17,5 +18,5 @@ export const POST: APIRoute = ({ locals, params, request }) =>
     const { venue, user } = await guardVenue(locals.principal, params.venue, 'page.edit');
     const input = parseWith(PageCreateSchema, await readJsonBody(request));
     const created = await createPage(venue.id, input, user);
-    return json(created, 201, { location: `/api/venues/${venue.slug}/pages/${created.page.slug}` });
+    return json<PageSaved<Date>>(created, 201, { location: `/api/venues/${venue.slug}/pages/${created.page.slug}` });
   });

@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { SectionsAnswer } from '~/lib/api-types';
 import { SectionCreateSchema } from '~/lib/schemas/page';
 import { guardVenue } from '~/server/guard';
 import { handle, json, parseWith, readJsonBody } from '~/server/http';
@@ -7,7 +8,7 @@ import { createSection, listSectionsWithCounts } from '~/server/page-sections';
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
     const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
-    return json({ sections: await listSectionsWithCounts(venue.id) });
+    return json<SectionsAnswer>({ sections: await listSectionsWithCounts(venue.id) });
   });
 
 export const POST: APIRoute = ({ locals, params, request }) =>

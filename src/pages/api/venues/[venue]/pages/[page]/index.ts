@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { PageAnswer, PageSaved } from '~/lib/api-types';
 import { PageSaveSchema } from '~/lib/schemas/page';
 import { guardVenue } from '~/server/guard';
 import { handle, idempotencyKey, json, parseWith, readJsonBody } from '~/server/http';
@@ -10,7 +11,7 @@ export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
     const { venue } = await guardVenue(locals.principal, params.venue, 'venue.read');
     const { page, section, revision } = await loadPageWithCurrent(venue.id, params.page);
-    return json({
+    return json<PageAnswer<Date>>({
       page: pageJson(page, section),
       revision: revision ? revisionJson(revision, authorJson(revision.authorId, revision.authorName), revision.doc) : null,
     });
@@ -26,5 +27,5 @@ export const PUT: APIRoute = ({ locals, params, request }) =>
     const key = idempotencyKey(request);
     const input = parseWith(PageSaveSchema, await readJsonBody(request));
     const saved = await saveRevision(venue.id, params.page, input, user, key);
-    return json(saved);
+    return json<PageSaved<Date>>(saved);
   });

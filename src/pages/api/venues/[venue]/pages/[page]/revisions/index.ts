@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { HistoryAnswer } from '~/lib/api-types';
 import { HistoryQuerySchema } from '~/lib/schemas/page';
 import { handle, json, parseWith, searchParamsObject } from '~/server/http';
 import { guardPage } from '~/server/pages';
@@ -10,5 +11,5 @@ export const GET: APIRoute = ({ locals, params, url }) =>
     const { page } = await guardPage(locals.principal, params.venue, params.page, 'venue.read');
     const query = parseWith(HistoryQuerySchema, searchParamsObject(url));
     const { revisions, nextBefore } = await listRevisions(page.id, query);
-    return json({ page: { slug: page.slug, title: page.title, currentRevision: page.currentRevision }, revisions, nextBefore });
+    return json<HistoryAnswer<Date>>({ page: { slug: page.slug, title: page.title, currentRevision: page.currentRevision }, revisions, nextBefore });
   });

@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { RevisionAnswer } from '~/lib/api-types';
 import { handle, json } from '~/server/http';
 import { guardPage } from '~/server/pages';
 import { getRevision, revisionNumberParam } from '~/server/revisions';
@@ -8,5 +9,5 @@ export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
     const { page } = await guardPage(locals.principal, params.venue, params.page, 'venue.read');
     const revision = await getRevision(page.id, revisionNumberParam(params.n));
-    return json({ revision }, 200, { 'cache-control': 'private, max-age=300' });
+    return json<RevisionAnswer<Date>>({ revision }, 200, { 'cache-control': 'private, max-age=300' });
   });

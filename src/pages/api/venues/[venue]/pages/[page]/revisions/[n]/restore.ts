@@ -1,4 +1,5 @@
 import type { APIRoute } from 'astro';
+import type { RestoreAnswer } from '~/lib/api-types';
 import { RestoreSchema } from '~/lib/schemas/page';
 import { handle, json, parseWith, readJsonBody } from '~/server/http';
 import { guardPage } from '~/server/pages';
@@ -15,5 +16,5 @@ export const POST: APIRoute = ({ locals, params, request }) =>
     const hasBody = request.headers.has('content-type') || Number(request.headers.get('content-length') ?? '0') > 0;
     const input = parseWith(RestoreSchema, hasBody ? await readJsonBody(request) : {});
     const restored = await restoreRevision(venue.id, params.page, n, input, user);
-    return json(restored, 201);
+    return json<RestoreAnswer<Date>>(restored, 201);
   });

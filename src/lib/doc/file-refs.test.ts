@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { PmNode } from '~/lib/doc/types';
-import { fileRefsInDoc } from './page-file-refs';
+import { fileIdsInDoc, fileRefsInDoc } from './file-refs';
+import type { PmNode } from './types';
 
 const text = (t: string, href?: string): PmNode => ({ type: 'text', text: t, ...(href ? { marks: [{ type: 'bold' }, { type: 'link', attrs: { href } }] } : {}) });
 
@@ -33,5 +33,38 @@ describe('fileRefsInDoc', () => {
       ],
     };
     expect(fileRefsInDoc(doc)).toEqual([]);
+  });
+});
+
+describe('fileIdsInDoc', () => {
+  const id = '3f2b8c1e-9a7d-4c21-b0e5-6d4a2f1c8e90';
+
+  it('finds images and links to files, in every variant form, each id once', () => {
+    const doc: PmNode = {
+      type: 'doc',
+      content: [
+        { type: 'image', attrs: { src: `/files/${id}/display`, alt: 'rack' } },
+        { type: 'image', attrs: { src: `/files/${id}/thumb` } },
+        { type: 'paragraph', content: [text('plot', '/files/abc_123'), text('rider', '/files/rider#page=2')] },
+        { type: 'image', attrs: { src: '/files/thumbonly/thumb' } },
+      ],
+    };
+    expect([...fileIdsInDoc(doc)].sort()).toEqual([id, 'abc_123', 'rider', 'thumbonly'].sort());
+  });
+
+  it('does not count a page that only mentions a file address in its text', () => {
+    const doc: PmNode = { type: 'doc', content: [{ type: 'paragraph', content: [text(`the photo used to be at /files/${id}/display and "/files/abc123"`)] }] };
+    expect([...fileIdsInDoc(doc)]).toEqual([]);
+  });
+
+  it('ignores look-alikes that are not this instance’s file route', () => {
+    const doc: PmNode = {
+      type: 'doc',
+      content: [
+        { type: 'paragraph', content: [text('a', '/filesystem/x'), text('b', '/files/'), text('c', '/files/a.b'), text('d', 'files/abc'), text('e', '/venues/files/abc')] },
+        { type: 'image', attrs: { src: { toString: () => '/files/abc' } } },
+      ],
+    };
+    expect([...fileIdsInDoc(doc)]).toEqual([]);
   });
 });

@@ -1,24 +1,15 @@
-import type { FileView } from '~/lib/schemas/file';
+import type { FileAnswer } from '~/lib/api-types';
 import { MAX_UPLOAD_BYTES } from '~/lib/upload-limits';
+import { ApiError, apiErrorFrom, UNREACHABLE } from './client';
+import { filesKey } from './files';
 
-/** An upload the server (or the network) refused; `message` is a sentence to show as it is. */
-export class UploadError extends Error {
-  constructor(
-    message: string,
-    /** HTTP status; 0 when the connection failed or the upload was cancelled. */
-    readonly status: number,
-    readonly field?: string,
-  ) {
-    super(message);
-    this.name = 'UploadError';
-  }
-}
+const CANCELLED = 'The upload was cancelled.';
 
 export interface UploadOptions {
   caption?: string;
   /** Slug of a page of the same venue the file is for (recorded with the file). */
   page?: string;
-  /** Cancels the upload; the promise rejects with an UploadError of status 0. */
+  /** Cancels the upload; the promise rejects with an ApiError of status 0. */
   signal?: AbortSignal;
 }
 
@@ -28,16 +19,17 @@ export type UploadProgress = (fraction: number, sentBytes: number, totalBytes: n
 /**
  * Sends one photo or PDF to POST /api/venues/:venue/files with real progress (fetch cannot
  * report upload progress; XMLHttpRequest can). Resolves with the stored file: put
- * `file.displayUrl` (photos) or `file.url` (PDFs) into a page.
+ * `file.displayUrl` (photos) or `file.url` (PDFs) into a page. Rejects with an ApiError, the same
+ * shape every other request of the islands refuses with.
  */
-export function uploadFile(venueSlug: string, file: Blob, options: UploadOptions = {}, onProgress?: UploadProgress): Promise<{ file: FileView }> {
+export function uploadFile(venueSlug: string, file: Blob, options: UploadOptions = {}, onProgress?: UploadProgress): Promise<FileAnswer> {
   return new Promise((resolve, reject) => {
     if (file.size > MAX_UPLOAD_BYTES) {
-      reject(new UploadError(`This file is larger than ${MAX_UPLOAD_BYTES / 1024 / 1024} MiB; choose a smaller one.`, 413, 'file'));
+      reject(new ApiError(413, `This file is larger than ${MAX_UPLOAD_BYTES / 1024 / 1024} MiB; choose a smaller one.`, 'file'));
       return;
     }
     if (options.signal?.aborted) {
-      reject(new UploadError('The upload was cancelled.', 0));
+      reject(new ApiError(UNREACHABLE, CANCELLED));
       return;
     }
     const form = new FormData();
@@ -47,7 +39,7 @@ export function uploadFile(venueSlug: string, file: Blob, options: UploadOptions
     form.append('file', file, file instanceof File ? file.name : 'upload');
 
     const xhr = new XMLHttpRequest();
-    xhr.open('POST', `/api/venues/${encodeURIComponent(venueSlug)}/files`);
+    xhr.open('POST', filesKey(venueSlug));
     xhr.setRequestHeader('accept', 'application/json');
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable && event.total > 0) onProgress?.(event.loaded / event.total, event.loaded, event.total);
@@ -55,14 +47,13 @@ export function uploadFile(venueSlug: string, file: Blob, options: UploadOptions
     xhr.onload = () => {
       const body = parseJson(xhr.responseText);
       if (xhr.status === 201 && body && typeof body === 'object' && 'file' in body) {
-        resolve(body as { file: FileView });
+        resolve(body as FileAnswer);
         return;
       }
-      const answer = (body ?? {}) as { error?: string; field?: string };
-      reject(new UploadError(answer.error ?? `The upload failed (HTTP ${xhr.status}); try again.`, xhr.status, answer.field));
+      reject(apiErrorFrom(xhr.status, body, (status) => `The upload failed (HTTP ${status}); try again.`));
     };
-    xhr.onerror = () => reject(new UploadError('The connection dropped during the upload; check the network and try again.', 0));
-    xhr.onabort = () => reject(new UploadError('The upload was cancelled.', 0));
+    xhr.onerror = () => reject(new ApiError(UNREACHABLE, 'The connection dropped during the upload; check the network and try again.'));
+    xhr.onabort = () => reject(new ApiError(UNREACHABLE, CANCELLED));
     options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
     xhr.send(form);
   });
