@@ -113,7 +113,7 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
           EQ
         </ToolButton>
         <ToolButton label="Insert a crossover block" onClick={() => run().insertContent({ type: CROSSOVER_BLOCK, attrs: newCrossoverBlock() }).run()} testId="insert-crossover">
-          X-over
+          Crossover
         </ToolButton>
         <ToolButton label="Insert a delay block" onClick={() => run().insertContent({ type: DELAY_BLOCK, attrs: newDelayBlock() }).run()} testId="insert-delay">
           Delay
