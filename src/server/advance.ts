@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
 import { isCheckStale } from '~/lib/check-staleness';
-import { fileIdsInDoc, fileRefsInDoc } from '~/lib/doc/file-refs';
+import { fileIdsInDoc, traceIdsIn } from '~/lib/doc/file-refs';
 import { loadVenueTraces } from './files/trace-data';
 import { renderDocHtml } from '~/lib/doc/render-html';
 import { fileIdOfUrl } from '~/lib/file-url';
@@ -51,7 +51,7 @@ export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = 
   const docs = rows.map((r) => (r.doc ? (JSON.parse(r.doc) as PmNode) : null));
   const refs = docs.map((doc) => (doc ? fileIdsInDoc(doc) : new Set<string>()));
   const available = await availableFileIds(venue.id, new Set(refs.flatMap((ids) => [...ids])));
-  const traceIds = new Set(docs.flatMap((doc) => (doc ? fileRefsInDoc(doc).filter((f) => f.kind === 'trace').map((f) => f.fileId) : [])));
+  const traceIds = new Set(docs.flatMap((doc) => (doc ? traceIdsIn(doc) : [])));
   const traces = await loadVenueTraces(venue.id, [...traceIds].filter((id) => available.has(id)));
   const fileUrl = (id: string) => (options.imageUrl ? options.imageUrl(`/files/${id}`) : `/files/${id}`);
   return rows.map((r, i) => {

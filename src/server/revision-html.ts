@@ -1,5 +1,5 @@
 import type { PmNode } from '~/lib/doc/types';
-import { fileIdsInDoc, fileRefsInDoc } from '~/lib/doc/file-refs';
+import { fileIdsInDoc, traceIdsIn } from '~/lib/doc/file-refs';
 import { renderDocHtml } from '~/lib/doc/render-html';
 import { fileIdOfUrl } from '~/lib/file-url';
 import { availableFileIds } from './files/available-files';
@@ -45,12 +45,12 @@ export async function revisionHtml(venue: { id: string; slug: string }, pageSlug
   const availableKey = [...available].sort().join(',');
   if (hit && hit.availableKey === availableKey) {
     // Re-inserting moves it to the young end of the Map's order.
-    cache.delete(revision.id);
-    cache.set(revision.id, hit);
+    cache.delete(key);
+    cache.set(key, hit);
     return hit.html;
   }
   parsed ??= JSON.parse(revision.doc) as PmNode;
-  const traceIds = fileRefsInDoc(parsed).filter((f) => f.kind === 'trace' && available.has(f.fileId)).map((f) => f.fileId);
+  const traceIds = traceIdsIn(parsed).filter((id) => available.has(id));
   const traces = await loadVenueTraces(venueId, traceIds);
   const html = renderDocHtml(parsed, {
     isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''),

@@ -44,3 +44,8 @@ export function fileRefsInDoc(doc: PmNode): FileRef[] {
 export function fileIdsInDoc(doc: PmNode): Set<string> {
   return new Set(fileRefsInDoc(doc).map((r) => r.fileId));
 }
+
+/** The ids of the measured traces a document's blocks attach. */
+export function traceIdsIn(doc: PmNode): string[] {
+  return fileRefsInDoc(doc).filter((r) => r.kind === 'trace').map((r) => r.fileId);
+}
