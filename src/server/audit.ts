@@ -1,5 +1,5 @@
-import { and, desc, eq, like, sql } from 'drizzle-orm';
-import { auditEvents, users } from '~/db/schema';
+import { and, desc, eq, inArray, isNull, like, or, sql } from 'drizzle-orm';
+import { auditEvents, memberships, users } from '~/db/schema';
 import { getDb, type Tx } from './db';
 
 export interface AuditEntry {
@@ -18,11 +18,15 @@ export async function recordAudit(tx: Tx, entry: AuditEntry): Promise<void> {
 
 export const AUDIT_PAGE_SIZE = 50;
 
-/** A venue's audit events, newest first, filtered by who and by kind (the part before the dot). */
+/**
+ * A venue's audit events, newest first, filtered by who and by kind (the part before the dot),
+ * with the sign-ins of its current members (those belong to no venue).
+ */
 export async function listAudit(venueId: string, filter: { actor?: string; kind?: string; page: number }) {
   const db = await getDb();
+  const membersNow = db.select({ id: memberships.userId }).from(memberships).where(eq(memberships.venueId, venueId));
   const where = and(
-    eq(auditEvents.venueId, venueId),
+    or(eq(auditEvents.venueId, venueId), and(isNull(auditEvents.venueId), like(auditEvents.action, 'signin.%'), inArray(auditEvents.actorId, membersNow))),
     filter.actor ? eq(auditEvents.actorId, filter.actor) : undefined,
     filter.kind ? like(auditEvents.action, `${filter.kind}.%`) : undefined,
   );
@@ -35,4 +39,14 @@ export async function listAudit(venueId: string, filter: { actor?: string; kind?
     .limit(AUDIT_PAGE_SIZE + 1)
     .offset((filter.page - 1) * AUDIT_PAGE_SIZE);
   return { events: rows.slice(0, AUDIT_PAGE_SIZE), page: filter.page, hasMore: rows.length > AUDIT_PAGE_SIZE };
+}
+
+export type SignInWay = 'password' | 'email-link' | 'password-reset' | 'invitation';
+
+/**
+ * A successful sign-in. It belongs to no venue: each venue's log shows the sign-ins of the
+ * people who are its members now (see listAudit).
+ */
+export async function recordSignIn(tx: Tx, userId: string, way: SignInWay): Promise<void> {
+  await recordAudit(tx, { venueId: null, actorId: userId, action: `signin.${way}`, targetType: 'user', targetId: userId });
 }

@@ -1,7 +1,7 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { invitations, memberships, users, venues } from '~/db/schema';
 import type { Role } from '~/lib/permissions';
-import { recordAudit } from './audit';
+import { recordAudit, recordSignIn } from './audit';
 import { blockedFor, countHit } from './auth/throttle';
 import { mailPerRecipient } from './auth/rate-limit';
 import { hashPassword } from './auth/password';
@@ -153,6 +153,8 @@ export async function acceptInvitation(token: string, who: { signedIn: SessionUs
     if (!current) await grantMembership(tx, inv.venueId, userId, inv.role);
     await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
     await recordAudit(tx, { venueId: inv.venueId, actorId: userId, action: 'invitation.accept', targetType: 'invitation', targetId: inv.id, detail: { email: inv.email, role: inv.role, newAccount: !account } });
+    // A new person leaves this page signed in; an existing account signed in already.
+    if (!account) await recordSignIn(tx, userId, 'invitation');
     return { userId, venueSlug: row.venueSlug };
   });
 }

@@ -1,6 +1,7 @@
 import type { APIRoute } from 'astro';
 import { AstroAuth } from '~/server/auth/astro-auth.mjs';
 import { clearSignInFailures, recordSignInFailure, signInRetryAfter } from '~/server/auth/rate-limit';
+import { recordPasswordSignIn } from '~/server/sign-ins';
 import { json } from '~/server/http';
 import { endAllSessions, readSessionUser } from '~/server/session';
 
@@ -67,6 +68,9 @@ export const POST: APIRoute = async (context) => {
   const target = response.headers.get('location') ?? '';
   const failed = /[?&]error=/.test(target) || response.status === 401;
   if (failed) await recordSignInFailure(email, address);
-  else await clearSignInFailures(email, address);
+  else {
+    await clearSignInFailures(email, address);
+    if (response.headers.getSetCookie().some((c) => c.includes('session-token=') && !/max-age=0/i.test(c))) await recordPasswordSignIn(email);
+  }
   return response;
 };
