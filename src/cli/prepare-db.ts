@@ -5,11 +5,14 @@
 import { openDb } from '~/db/client';
 import { runMigrations } from '~/db/migrate';
 import { ConfigError, getConfig } from '~/server/config';
+import { ensureSearchIndex } from '~/server/search-index';
 
 async function main() {
   const config = getConfig();
   const db = await openDb(config.DATABASE_URL);
   await runMigrations(db);
+  // Before any server process starts, so the workers of a cluster do not all rebuild at once.
+  await ensureSearchIndex(db);
   if (!config.SEED_DEMO) {
     db.$client.close();
     return;

@@ -53,3 +53,10 @@ describe('markedSnippet', () => {
     expect(hits(markAll('plain \u0002fake\u0003 text', q('text')))).toEqual(['text']);
   });
 });
+
+describe('the shortest run that holds the hit', () => {
+  it('marks dB(A) in "98 dB(A)" for dba, and all of it for 98dba', () => {
+    expect(hits(markAll('limit 98 dB(A) here', q('dba')))).toEqual(['dB(A)']);
+    expect(hits(markAll('limit 98 dB(A) here', q('98dba')))).toEqual(['98 dB(A)']);
+  });
+});

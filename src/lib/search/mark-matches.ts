@@ -19,10 +19,21 @@ function matcher(q: MatchQuery): (term: string) => boolean {
 }
 
 /** The parts of a group a query hits: the whole group when a joined spelling matches, else its words. */
-function hitsIn(g: TermGroup, hit: (t: string) => boolean): Span[] {
+function hitsIn(text: string, g: TermGroup, hit: (t: string) => boolean): Span[] {
   const words = g.words.filter((w) => wordTerms(w).some(hit));
   if (words.length) return words.map((w) => ({ start: w.start, end: w.end }));
-  return groupTerms(g).some(hit) ? [{ start: g.start, end: g.end }] : [];
+  if (!groupTerms(g).some(hit)) return [];
+  // The shortest run of words that holds the hit: "98 dB(A)" searched as "dba" marks "dB(A)".
+  for (let len = 2; len < g.words.length; len++) {
+    for (let i = 0; i + len <= g.words.length; i++) {
+      const start = g.words[i].start;
+      const last = g.words[i + len - 1].end;
+      const end = text[last] === ')' ? last + 1 : last;
+      const [run] = termGroups(text.slice(start, end));
+      if (run && run.words.length === len && groupTerms(run).some(hit)) return [{ start, end }];
+    }
+  }
+  return [{ start: g.start, end: g.end }];
 }
 
 /** Control characters are the match markers: one in the text must never open a mark. Same length, same offsets. */
@@ -45,7 +56,7 @@ function marked(text: string, spans: Span[], from: number, to: number): string {
 export function markAll(raw: string, q: MatchQuery): string {
   const text = withoutControls(raw);
   const hit = matcher(q);
-  const spans = termGroups(text).flatMap((g) => hitsIn(g, hit));
+  const spans = termGroups(text).flatMap((g) => hitsIn(text, g, hit));
   return marked(text, spans, 0, text.length);
 }
 
@@ -61,7 +72,7 @@ export function markedSnippet(raw: string, q: MatchQuery, words = 14): string {
   const spans: Span[] = [];
   let first = -1;
   groups.forEach((g, i) => {
-    const s = hitsIn(g, hit);
+    const s = hitsIn(text, g, hit);
     if (s.length && first < 0) first = i;
     spans.push(...s);
   });
