@@ -2,8 +2,8 @@ import { sql } from 'drizzle-orm';
 import { snippetHtml, snippetParts } from '~/lib/doc/marked-snippet';
 import { toSearchQuery } from '~/lib/doc/search-query';
 import { markAll, markedSnippet } from '~/lib/search/mark-matches';
-import { getDb } from './db';
 import { readableVenueCondition } from './guard';
+import { readOffLoop } from './search-reader';
 import type { SessionUser } from './session';
 
 interface HitRow {
@@ -25,7 +25,7 @@ export const SEARCH_MAX_OFFSET = 180;
 /** BM25 with a title match counting ten times a body match. */
 const RANKING = 'bm25(10.0, 1.0)';
 /** Enough of a page's text to find the first hit in for the snippet; the rest stays in the database. */
-const SNIPPET_SOURCE_CHARS = 20_000;
+const SNIPPET_SOURCE_CHARS = 8_000;
 
 /**
  * Full-text search over the current text of the pages this person may read. The access filter
@@ -37,12 +37,12 @@ const SNIPPET_SOURCE_CHARS = 20_000;
 export async function searchPages(user: SessionUser, q: string, limit = 20, offset = 0) {
   const query = toSearchQuery(q);
   if (!query) return [];
-  const db = await getDb();
   // Archived pages are out of the book, so out of search too.
   const readable = sql`${readableVenueCondition(user, sql`p.venue_id`)} AND p.archived_at IS NULL`;
   // ORDER BY rank with the ranking given through `rank MATCH` lets FTS5 hand rows over best
-  // first, so the joins and the access filter run only until the page is full.
-  const rows = await db.all<HitRow>(sql`
+  // first, so the joins and the access filter run only until the page is full. The query runs
+  // off the event loop: a broad one must not hold up everyone else's requests.
+  const rows = await readOffLoop<HitRow>(sql`
     SELECT v.slug AS venueSlug, v.name AS venueName, p.slug AS pageSlug, p.title AS pageTitle,
            s.slug AS sectionSlug, s.title AS sectionTitle, p.updated_at AS updatedAt,
            substr(r.plain_text, 1, ${SNIPPET_SOURCE_CHARS}) AS body
