@@ -29,6 +29,9 @@ async function main() {
       const { demoPeople, demoVenues } = await import('~/server/demo/seed-data');
       const added = await seedDemoPhotos(demoVenues[0].slug, demoPeople.engineer.email);
       console.log(`  ${added} demo drawings uploaded into ${config.UPLOADS_DIR}`);
+      const { seedDemoTraces } = await import('~/server/demo/seed-traces');
+      const traces = await seedDemoTraces(demoVenues[0].slug, demoPeople.engineer.email);
+      console.log(`  ${traces} demo measurement traces (invented) attached to the processing page`);
     }
   }
   db.$client.close();

@@ -20,6 +20,7 @@ import { pageScriptBytes } from '../helpers/page-scripts';
 import { startServer } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
 import { benchAcoustics } from './acoustics';
+import { benchTraces } from './traces';
 import { addBigVenue } from './big-venue';
 import { benchLighthouse } from './lighthouse';
 import { LOAD_TOOL, runLoad, type LoadResult } from './load-generator';
@@ -207,5 +208,6 @@ async function main() {
 
 await main();
 benchAcoustics();
+benchTraces();
 await benchLighthouse();
 if (process.env.BENCH_PIPELINE === '1') spawnSync(process.execPath, ['node_modules/tsx/dist/cli.mjs', 'src/cli/bench-upload.ts'], { stdio: 'inherit' });
