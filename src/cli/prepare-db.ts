@@ -5,11 +5,14 @@
 import { openDb } from '~/db/client';
 import { runMigrations } from '~/db/migrate';
 import { ConfigError, getConfig } from '~/server/config';
+import { ensureSearchIndex } from '~/server/search-index';
 
 async function main() {
   const config = getConfig();
   const db = await openDb(config.DATABASE_URL);
   await runMigrations(db);
+  // Before any server process starts, so the workers of a cluster do not all rebuild at once.
+  await ensureSearchIndex(db);
   if (!config.SEED_DEMO) {
     db.$client.close();
     return;
@@ -26,6 +29,9 @@ async function main() {
       const { demoPeople, demoVenues } = await import('~/server/demo/seed-data');
       const added = await seedDemoPhotos(demoVenues[0].slug, demoPeople.engineer.email);
       console.log(`  ${added} demo drawings uploaded into ${config.UPLOADS_DIR}`);
+      const { seedDemoTraces } = await import('~/server/demo/seed-traces');
+      const traces = await seedDemoTraces(demoVenues[0].slug, demoPeople.engineer.email);
+      console.log(`  ${traces} demo measurement traces (invented) attached to the processing page`);
     }
   }
   db.$client.close();

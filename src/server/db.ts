@@ -1,6 +1,7 @@
 import { openDb, type Db } from '~/db/client';
 import { runMigrations } from '~/db/migrate';
 import { getConfig } from './config';
+import { ensureSearchIndex } from './search-index';
 import { enqueueWrite } from './write-queue';
 
 interface Handles {
@@ -18,6 +19,7 @@ function handles(): Promise<Handles> {
     const url = getConfig().DATABASE_URL;
     const write = await openDb(url, { connections: 1 });
     await enqueueWrite(() => runMigrations(write));
+    await enqueueWrite(() => ensureSearchIndex(write));
     // A libSQL server handles concurrency itself; only a local file needs a second client.
     const read = url.startsWith('file:') ? await openDb(url, { connections: READ_CONNECTIONS }) : write;
     return { read, write };

@@ -1,8 +1,9 @@
 import { sql } from 'drizzle-orm';
-import { MATCH_CLOSE, MATCH_OPEN, snippetHtml, snippetParts } from '~/lib/doc/marked-snippet';
-import { toFtsQuery } from '~/lib/doc/search-query';
-import { getDb } from './db';
+import { snippetHtml, snippetParts } from '~/lib/doc/marked-snippet';
+import { toSearchQuery } from '~/lib/doc/search-query';
+import { markAll, markedSnippet } from '~/lib/search/mark-matches';
 import { readableVenueCondition } from './guard';
+import { readOffLoop } from './search-reader';
 import type { SessionUser } from './session';
 
 interface HitRow {
@@ -13,53 +14,60 @@ interface HitRow {
   sectionSlug: string;
   sectionTitle: string;
   updatedAt: number;
-  markedTitle: string;
-  markedBody: string;
+  body: string | null;
 }
 
-/** Most hits one search answers: the results page shows this many, suggestions fewer. */
-export const SEARCH_PAGE_LIMIT = 50;
+/** Most hits one results page shows; suggestions ask for fewer. */
+export const SEARCH_PAGE_LIMIT = 20;
+/** How far the results page lets a person page: the best 200 matches, then "add a word". */
+export const SEARCH_MAX_OFFSET = 180;
 
 /** BM25 with a title match counting ten times a body match. */
 const RANKING = 'bm25(10.0, 1.0)';
-const SNIPPET_TOKENS = 14;
+/** Enough of a page's text to find the first hit in for the snippet; the rest stays in the database. */
+const SNIPPET_SOURCE_CHARS = 8_000;
 
 /**
  * Full-text search over the current text of the pages this person may read. The access filter
  * is part of the SQL, so a page of another venue is never read, ranked or counted. The query
- * string is rebuilt by toFtsQuery, so nothing typed is ever FTS5 syntax.
+ * string is rebuilt by toSearchQuery, so nothing typed is ever FTS5 syntax. Snippets are cut
+ * from the original text (the index holds the joined spellings too), with the hits marked by
+ * the same reading of the words that built the index.
  */
-export async function searchPages(user: SessionUser, q: string, limit = 20) {
-  const match = toFtsQuery(q);
-  if (!match) return [];
-  const db = await getDb();
+export async function searchPages(user: SessionUser, q: string, limit = 20, offset = 0) {
+  const query = toSearchQuery(q);
+  if (!query) return [];
   // Archived pages are out of the book, so out of search too.
   const readable = sql`${readableVenueCondition(user, sql`p.venue_id`)} AND p.archived_at IS NULL`;
   // ORDER BY rank with the ranking given through `rank MATCH` lets FTS5 hand rows over best
-  // first, so the joins, the access filter and snippet() run only until the page is full.
-  const rows = await db.all<HitRow>(sql`
+  // first, so the joins and the access filter run only until the page is full. The query runs
+  // off the event loop: a broad one must not hold up everyone else's requests.
+  const rows = await readOffLoop<HitRow>(sql`
     SELECT v.slug AS venueSlug, v.name AS venueName, p.slug AS pageSlug, p.title AS pageTitle,
            s.slug AS sectionSlug, s.title AS sectionTitle, p.updated_at AS updatedAt,
-           highlight(pages_fts, 0, ${MATCH_OPEN}, ${MATCH_CLOSE}) AS markedTitle,
-           snippet(pages_fts, 1, ${MATCH_OPEN}, ${MATCH_CLOSE}, '…', ${SNIPPET_TOKENS}) AS markedBody
+           substr(r.plain_text, 1, ${SNIPPET_SOURCE_CHARS}) AS body
     FROM pages_fts
     JOIN page_search_keys k ON k.id = pages_fts.rowid
     JOIN pages p ON p.id = k.page_id
     JOIN venues v ON v.id = p.venue_id
     JOIN sections s ON s.id = p.section_id
-    WHERE pages_fts MATCH ${match} AND pages_fts.rank MATCH ${RANKING} AND ${readable}
+    LEFT JOIN revisions r ON r.page_id = p.id AND r.number = p.current_revision
+    WHERE pages_fts MATCH ${query.match} AND pages_fts.rank MATCH ${RANKING} AND ${readable}
     ORDER BY pages_fts.rank
-    LIMIT ${limit}`);
-  return rows.map((r) => ({
-    venue: { slug: r.venueSlug, name: r.venueName },
-    page: { slug: r.pageSlug, title: r.pageTitle },
-    section: { slug: r.sectionSlug, title: r.sectionTitle },
-    url: `/venues/${r.venueSlug}/${r.pageSlug}`,
-    updatedAt: new Date(Number(r.updatedAt)),
-    titleParts: snippetParts(r.markedTitle ?? r.pageTitle),
-    snippet: snippetHtml(r.markedBody ?? ''),
-    snippetParts: snippetParts(r.markedBody ?? ''),
-  }));
+    LIMIT ${limit} OFFSET ${Math.min(Math.max(0, offset), SEARCH_MAX_OFFSET)}`);
+  return rows.map((r) => {
+    const markedBody = markedSnippet(r.body ?? '', query);
+    return {
+      venue: { slug: r.venueSlug, name: r.venueName },
+      page: { slug: r.pageSlug, title: r.pageTitle },
+      section: { slug: r.sectionSlug, title: r.sectionTitle },
+      url: `/venues/${r.venueSlug}/${r.pageSlug}`,
+      updatedAt: new Date(Number(r.updatedAt)),
+      titleParts: snippetParts(markAll(r.pageTitle, query)),
+      snippet: snippetHtml(markedBody),
+      snippetParts: snippetParts(markedBody),
+    };
+  });
 }
 
 export type SearchHit = Awaited<ReturnType<typeof searchPages>>[number];

@@ -11,6 +11,7 @@ import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
+import { reindexPage } from './search-index';
 import { FORMER_MEMBER, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
 
@@ -128,6 +129,7 @@ export async function createPage(venueId: string, input: PageCreate, actor: Sess
       .insert(revisions)
       .values({ pageId: page.id, number: 1, doc: JSON.stringify(doc), plainText, summary, authorId: actor.id, createdAt: now })
       .returning();
+    await reindexPage(tx, page.id);
     await recordAudit(tx, {
       venueId,
       actorId: actor.id,

@@ -7,6 +7,7 @@ import { getDb, writeTx, type Reader, type Tx } from './db';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
 import { assertOwnFileRefs } from './page-file-refs';
+import { reindexPage } from './search-index';
 import { findPage, pageJson, sectionInTx, type PageRow } from './pages';
 import { authorJson, revisionJson } from './revision-json';
 import type { SessionUser } from './session';
@@ -58,7 +59,7 @@ interface Append {
   pageChanges?: Partial<Pick<typeof pages.$inferInsert, 'title' | 'sectionId'>>;
 }
 
-/** Adds the next revision and points the page at it; the FTS triggers follow in the same transaction. */
+/** Adds the next revision and points the page at it; its search row follows in the same transaction. */
 async function appendRevision(tx: Tx, a: Append) {
   const number = a.page.currentRevision + 1;
   const now = new Date();
@@ -73,6 +74,7 @@ async function appendRevision(tx: Tx, a: Append) {
     .returning();
   // The queue makes this unreachable; the guard in WHERE keeps the invariant if that ever changes.
   if (!page) throw new HttpError(409, 'The page changed while saving; reload and save again.');
+  await reindexPage(tx, page.id);
   return { revision, page };
 }
 

@@ -72,6 +72,8 @@ function signedInScreens(): [string, ((page: Page) => Promise<unknown>) | undefi
     [`/venues/${venue}`, undefined],
     [`/venues/${venue}/${pageSlug}`, undefined],
     [`/venues/${venue}/${pageSlug}/edit`, (p) => p.getByTestId('editor').waitFor()],
+    // The processing page's EQ and crossover blocks open with their measured-trace controls.
+    [`/venues/${venue}/system-processing/edit`, (p) => p.getByTestId('eq-block-traces').first().waitFor()],
     [`/venues/${venue}/${pageSlug}/history`, (p) => p.waitForLoadState('networkidle')],
     [`/venues/${venue}/files`, (p) => p.waitForLoadState('networkidle')],
     [`/venues/${venue}/sections`, undefined],

@@ -1,7 +1,8 @@
 import { EditorContent, useEditor } from '@tiptap/react';
-import { useEffect, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { docPlainText, renderDocHtml } from '~/lib/doc/render-html';
 import type { PmNode } from '~/lib/doc/types';
+import { BlockVenueContext } from './blocks/block-venue';
 import { editorExtensions } from './blocks/editor-extensions';
 import { ConflictPanel } from './ConflictPanel';
 import { copyRich } from './copy-text';
@@ -54,6 +55,7 @@ export default function PageEditor({ venue, sections, page, current, mayUpload =
       },
     },
   });
+  const blockVenue = useMemo(() => ({ venueSlug: venue.slug, pageSlug: page?.slug, mayUpload }), [venue.slug, page?.slug, mayUpload]);
   const drafts = useDraftAutosave(editor, venue.slug, pageKey, { base, title, section, summary });
 
   // Once the editor exists: offer any unsaved text this device kept from an earlier visit.
@@ -180,7 +182,9 @@ export default function PageEditor({ venue, sections, page, current, mayUpload =
         <div>
           {conflict && <h3 className="mb-1 text-sm font-semibold uppercase tracking-wide text-muted">Your text (you can still edit it)</h3>}
           <EditorToolbar editor={ed} photo={{ venueSlug: venue.slug, pageSlug: page?.slug, mayUpload }} />
-          <EditorContent editor={ed} />
+          <BlockVenueContext.Provider value={blockVenue}>
+            <EditorContent editor={ed} />
+          </BlockVenueContext.Provider>
         </div>
       </div>
       <SaveBar

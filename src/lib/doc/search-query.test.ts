@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { toFtsQuery } from './search-query';
+import { toFtsQuery, toSearchQuery } from './search-query';
 
 describe('toFtsQuery', () => {
   it('quotes each term and prefixes the last', () => {
@@ -7,15 +7,18 @@ describe('toFtsQuery', () => {
   });
 
   it.each([
-    ["' OR 1=1--", '"OR" "1=1--"'],
-    ['NEAR(a bc)', '"NEAR(a" "bc)"'],
-    ['NEAR(a bcd)', '"NEAR(a" "bcd)"*'],
-    ['a"bcd', '"a""bcd"*'],
-    ['"unbalanced', '"""unbalanced"*'],
-    ['-minus', '"-minus"*'],
-    ['title:x', '"title:x"'],
-    ['title:xlr', '"title:xlr"*'],
-    ['x AND y', '"x" "AND" "y"'],
+    // Only letters, digits and a decimal point survive into a term, so nothing typed is FTS5 syntax.
+    ["' OR 1=1--", '"or" "1" "1"'],
+    ['NEAR(a bc)', '"near" "a" "bc"'],
+    ['NEAR(a bcd)', '"near" "a" "bcd"*'],
+    ['a"bcd', '"a" "bcd"*'],
+    ['"unbalanced', '"unbalanced"*'],
+    ['-minus', '"minus"*'],
+    ['title:x', '"title" "x"'],
+    ['title:xlr', '"title" "xlr"*'],
+    ['x AND y', '"x" "and" "y"'],
+    ['{title body}: x', '"title" "body" "x"'],
+    ['a^b', '"a" "b"'],
   ])('%s is searched as text', (input, expected) => {
     expect(toFtsQuery(input)).toBe(expected);
   });
@@ -27,12 +30,31 @@ describe('toFtsQuery', () => {
   it('matches a last word of one or two letters whole, from three letters on as a prefix', () => {
     expect(toFtsQuery('s')).toBe('"s"');
     expect(toFtsQuery('st')).toBe('"st"');
-    expect(toFtsQuery('s*')).toBe('"s*"');
+    expect(toFtsQuery('s*')).toBe('"s"');
     expect(toFtsQuery('sta')).toBe('"sta"*');
     expect(toFtsQuery('stage 2')).toBe('"stage" "2"');
-    expect(toFtsQuery('stage-2')).toBe('"stage-2"');
-    expect(toFtsQuery('2-sta')).toBe('"2-sta"*');
-    expect(toFtsQuery('ü')).toBe('"ü"');
+    expect(toFtsQuery('stage-2')).toBe('"stage2"*');
+    expect(toFtsQuery('2-st')).toBe('"2st"*');
+    expect(toFtsQuery('ü')).toBe('"u"');
+  });
+
+  it.each([
+    ['Wi-Fi password', '"wifi" "password"*'],
+    ['wifi', '"wifi"*'],
+    ['63 A', '"63a"*'],
+    ['63A', '"63a"*'],
+    ['63 amps', '"63a"*'],
+    ['dB(A) limit', '"dba" "limit"*'],
+    ['db limit', '"db" "limit"*'],
+    ['2.5 mm', '"2.5mm"*'],
+    ['QX-220 desk', '"qx220" "desk"*'],
+  ])('%s is searched in the index spelling: %s', (input, expected) => {
+    expect(toFtsQuery(input)).toBe(expected);
+  });
+
+  it('toSearchQuery hands back the terms for marking hits, and whether the last is a prefix', () => {
+    expect(toSearchQuery('Wi-Fi pass')).toEqual({ match: '"wifi" "pass"*', terms: ['wifi', 'pass'], prefixLast: true });
+    expect(toSearchQuery('db')).toEqual({ match: '"db"', terms: ['db'], prefixLast: false });
   });
 
   it('caps the number of terms', () => {

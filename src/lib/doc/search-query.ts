@@ -1,7 +1,10 @@
+import { queryTerms } from '~/lib/search/normalise-terms';
+
 /**
  * Turns what a person typed into an FTS5 query that can only ever mean "these words".
- * Every term becomes a quoted string (inner quotes doubled), so operators (AND, OR, NOT, NEAR),
- * column filters, `*`, `-`, `^` and stray quotes are searched as text. The last term matches as
+ * Terms are read by queryTerms (hyphens, number-unit spacing, case and unit spellings folded) and
+ * each becomes a quoted string, so operators (AND, OR, NOT, NEAR), column filters, `*`, `-`, `^`
+ * and stray quotes are searched as text. The last term matches as
  * a prefix, for results while typing, when its last word has SEARCH_MIN_CHARS letters or digits or more: a
  * one- or two-letter prefix matches most of a venue's words and costs a scan of the whole index
  * for nothing a person could use. Terms with no letter or digit are dropped because the
@@ -11,16 +14,27 @@ export const SEARCH_MAX_TERMS = 12;
 /** Below this many characters the box waits, and a last term is matched as a whole word only. */
 export const SEARCH_MIN_CHARS = 3;
 
-export function toFtsQuery(input: string): string | null {
-  // Control characters (NUL above all) end an FTS5 string early; they are never search text.
-  const terms = input
-    .replace(/\p{Cc}/gu, ' ')
-    .split(/\s+/u)
-    .filter((t) => /[\p{L}\p{N}]/u.test(t))
-    .slice(0, SEARCH_MAX_TERMS);
+export interface SearchQuery {
+  /** The FTS5 MATCH string. */
+  match: string;
+  /** The terms looked for, in the index's spelling, for marking hits in the original text. */
+  terms: string[];
+  prefixLast: boolean;
+}
+
+export function toSearchQuery(input: string): SearchQuery | null {
+  // Terms come out of the same reading of the trade's spellings the index was built with, as
+  // letters, digits and at most a decimal point: nothing of them is FTS5 syntax.
+  const terms = queryTerms(input).slice(0, SEARCH_MAX_TERMS);
   if (terms.length === 0) return null;
+  const prefixLast = lastTokenChars(terms[terms.length - 1]) >= SEARCH_MIN_CHARS;
   const last = terms.length - 1;
-  return terms.map((t, i) => `"${t.replace(/"/g, '""')}"${i === last && lastTokenChars(t) >= SEARCH_MIN_CHARS ? '*' : ''}`).join(' ');
+  const match = terms.map((t, i) => `"${t.replace(/"/g, '""')}"${i === last && prefixLast ? '*' : ''}`).join(' ');
+  return { match, terms, prefixLast };
+}
+
+export function toFtsQuery(input: string): string | null {
+  return toSearchQuery(input)?.match ?? null;
 }
 
 /** Length of the term's last token (FTS5 applies `*` to the last token of a quoted phrase). */

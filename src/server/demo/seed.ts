@@ -5,6 +5,7 @@ import { demoPeople, demoVenues } from './seed-data';
 import { docPlainText } from '~/lib/doc/render-html';
 import { hashPassword } from '~/server/auth/password';
 import { newSecretToken, tokenHash } from '~/server/secret-token';
+import { reindexPage } from '~/server/search-index';
 
 export interface SeedResult {
   seeded: boolean;
@@ -92,6 +93,7 @@ export async function seedDemo(db: Db, password: string, now = Date.now()): Prom
             createdAt: new Date(now - r.daysAgo * DAY_MS + i * 60_000),
           })),
         );
+        await reindexPage(tx, page.id);
         // The audit log tells the same story as the history.
         await tx.insert(auditEvents).values(
           p.revisions.map((r, i) => ({

@@ -5,6 +5,7 @@ import { crossoverPlotSvg } from '~/lib/doc/render-blocks';
 import { BlockFrame, field, smallButton } from './BlockFrame';
 import { LivePlot } from './LivePlot';
 import { NumberCell, rangeCheck } from './NumberCell';
+import { TracePanel } from './TracePanel';
 
 function EdgeFields({ title, edge, onChange, top, testId }: { title: string; edge: XoverEdge | null; onChange: (e: XoverEdge | null) => void; top: number; testId: string }) {
   const slopes: readonly number[] = edge ? LIMITS.crossoverSlopesDbPerOctave[edge.family] : [];
@@ -102,6 +103,7 @@ export default function CrossoverBlockView({ node, updateAttributes, deleteNode 
       >
         Add a way
       </button>
+      <TracePanel traces={a.traces} compare={a.compare} onChange={(patch) => set(patch)} testId="crossover-block" />
     </BlockFrame>
   );
 }

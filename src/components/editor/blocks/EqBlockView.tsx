@@ -7,6 +7,7 @@ import { eqPlotSvg, Q_CONVENTION } from '~/lib/doc/render-blocks';
 import { BlockFrame, field, smallButton } from './BlockFrame';
 import { LivePlot } from './LivePlot';
 import { NumberCell, rangeCheck } from './NumberCell';
+import { TracePanel } from './TracePanel';
 
 function widthText(band: EqBand, rate: number): string {
   try {
@@ -113,6 +114,7 @@ export default function EqBlockView({ node, updateAttributes, deleteNode }: Node
           </select>
         </label>
       </div>
+      <TracePanel traces={a.traces} compare={a.compare} onChange={(patch) => set(patch)} testId="eq-block" />
     </BlockFrame>
   );
 }

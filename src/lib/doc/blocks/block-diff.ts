@@ -1,5 +1,5 @@
 /** A processor block's change in words: "Band 3: 250 → 315 Hz, −3.0 → −4.5 dB, Q 1.4 → 2.0"; "Sub delay 4.1 → 5.3 ms". */
-import { BAND_TYPE_LABELS, CROSSOVER_BLOCK, DELAY_BLOCK, EQ_BLOCK, hasGain, isShelf, type CrossoverBlockAttrs, type DelayBlockAttrs, type EqBand, type EqBlockAttrs, type XoverEdge } from './block-data';
+import { BAND_TYPE_LABELS, blockTraces, type TraceCompare, type TraceRef, CROSSOVER_BLOCK, DELAY_BLOCK, EQ_BLOCK, hasGain, isShelf, type CrossoverBlockAttrs, type DelayBlockAttrs, type EqBand, type EqBlockAttrs, type XoverEdge } from './block-data';
 import { bandSummary, familyLabel, fixed, num, rateLabel } from './block-format';
 import { delayResult } from './block-curves';
 
@@ -25,6 +25,31 @@ function common<T extends { label: string; note: string; sampleRate: number }>(a
   if (a.note !== b.note) out.push(b.note ? (a.note ? 'Note changed' : 'Note added') : 'Note removed');
 }
 
+const traceName = (t: TraceRef) => (t.label ? `"${t.label}"` : 'an unlabelled trace');
+
+/** Traces attached or detached (by label), their notes changed, and the compared pair. */
+function traceChanges(a: { traces?: TraceRef[]; compare?: TraceCompare | null }, b: { traces?: TraceRef[]; compare?: TraceCompare | null }, out: string[]) {
+  const before = blockTraces(a);
+  const after = blockTraces(b);
+  for (const t of after) if (!before.some((x) => x.fileId === t.fileId)) out.push(`Trace ${traceName(t)} attached`);
+  for (const t of before) if (!after.some((x) => x.fileId === t.fileId)) out.push(`Trace ${traceName(t)} removed`);
+  for (const t of after) {
+    const x = before.find((y) => y.fileId === t.fileId);
+    if (!x) continue;
+    if (x.label !== t.label) out.push(`Trace renamed ${traceName(x)} → ${traceName(t)}`);
+    else if (!same(x, t)) out.push(`Trace ${traceName(t)} changed`);
+  }
+  const name = (c: TraceCompare | null | undefined, list: TraceRef[]) => {
+    if (!c) return 'none';
+    const n = (id: string) => {
+      const t = list.find((x) => x.fileId === id);
+      return t ? traceName(t) : 'a removed trace';
+    };
+    return `${n(c.after)} − ${n(c.before)}`;
+  };
+  if (!same(a.compare ?? null, b.compare ?? null)) out.push(`Comparison ${arrow(name(a.compare, before), name(b.compare, after))}`);
+}
+
 function eqChanges(a: EqBlockAttrs, b: EqBlockAttrs): string[] {
   const out: string[] = [];
   common(a, b, out);
@@ -40,6 +65,7 @@ function eqChanges(a: EqBlockAttrs, b: EqBlockAttrs): string[] {
   }
   if (a.outputGain !== b.outputGain) out.push(`Output gain ${arrow(fixed(a.outputGain), fixed(b.outputGain))} dB`);
   if (a.polarity !== b.polarity) out.push(`Polarity ${arrow(a.polarity, b.polarity)}`);
+  traceChanges(a, b, out);
   return out;
 }
 
@@ -68,6 +94,7 @@ function crossoverChanges(a: CrossoverBlockAttrs, b: CrossoverBlockAttrs): strin
     if (x.polarity !== y.polarity) out.push(`${name} polarity ${arrow(x.polarity, y.polarity)}`);
     if (x.delayMs !== y.delayMs) out.push(`${name} delay ${arrow(fixed(x.delayMs), fixed(y.delayMs))} ms`);
   }
+  traceChanges(a, b, out);
   return out;
 }
 

@@ -1,0 +1,86 @@
+import { MATCH_CLOSE, MATCH_OPEN } from '~/lib/doc/marked-snippet';
+import { groupTerms, termGroups, wordTerms, type TermGroup } from './normalise-terms';
+
+export interface MatchQuery {
+  terms: string[];
+  /** The last term also matches as the start of a term (results while typing). */
+  prefixLast: boolean;
+}
+
+interface Span {
+  start: number;
+  end: number;
+}
+
+function matcher(q: MatchQuery): (term: string) => boolean {
+  const whole = new Set(q.terms);
+  const prefix = q.prefixLast ? q.terms.at(-1) : undefined;
+  return (t) => whole.has(t) || (prefix !== undefined && t.startsWith(prefix));
+}
+
+/** The parts of a group a query hits: the whole group when a joined spelling matches, else its words. */
+function hitsIn(text: string, g: TermGroup, hit: (t: string) => boolean): Span[] {
+  const words = g.words.filter((w) => wordTerms(w).some(hit));
+  if (words.length) return words.map((w) => ({ start: w.start, end: w.end }));
+  if (!groupTerms(g).some(hit)) return [];
+  // The shortest run of words that holds the hit: "98 dB(A)" searched as "dba" marks "dB(A)".
+  for (let len = 2; len < g.words.length; len++) {
+    for (let i = 0; i + len <= g.words.length; i++) {
+      const start = g.words[i].start;
+      const last = g.words[i + len - 1].end;
+      const end = text[last] === ')' ? last + 1 : last;
+      const [run] = termGroups(text.slice(start, end));
+      if (run && run.words.length === len && groupTerms(run).some(hit)) return [{ start, end }];
+    }
+  }
+  return [{ start: g.start, end: g.end }];
+}
+
+/** Control characters are the match markers: one in the text must never open a mark. Same length, same offsets. */
+function withoutControls(text: string): string {
+  return text.replace(/\p{Cc}/gu, ' ');
+}
+
+function marked(text: string, spans: Span[], from: number, to: number): string {
+  let out = '';
+  let at = from;
+  for (const s of spans) {
+    if (s.end <= from || s.start >= to) continue;
+    out += text.slice(at, s.start) + MATCH_OPEN + text.slice(s.start, s.end) + MATCH_CLOSE;
+    at = s.end;
+  }
+  return (out + text.slice(at, to)).replace(/\s+/gu, ' ');
+}
+
+/** The whole text with every hit wrapped in the match markers (for titles). */
+export function markAll(raw: string, q: MatchQuery): string {
+  const text = withoutControls(raw);
+  const hit = matcher(q);
+  const spans = termGroups(text).flatMap((g) => hitsIn(text, g, hit));
+  return marked(text, spans, 0, text.length);
+}
+
+/**
+ * A window of about `words` words around the first hit, hits marked, "…" where text was cut;
+ * the opening words when nothing in the text is hit (the title matched).
+ */
+export function markedSnippet(raw: string, q: MatchQuery, words = 14): string {
+  const text = withoutControls(raw);
+  const hit = matcher(q);
+  const groups = termGroups(text);
+  if (groups.length === 0) return '';
+  const spans: Span[] = [];
+  let first = -1;
+  groups.forEach((g, i) => {
+    const s = hitsIn(text, g, hit);
+    if (s.length && first < 0) first = i;
+    spans.push(...s);
+  });
+  const lead = Math.floor(words / 3);
+  const startGroup = first < 0 ? 0 : Math.max(0, Math.min(first - lead, groups.length - words));
+  const endGroup = Math.min(groups.length, startGroup + words) - 1;
+  const from = startGroup === 0 ? 0 : groups[startGroup].start;
+  const to = endGroup === groups.length - 1 ? text.length : groups[endGroup].end;
+  const body = marked(text, spans, from, to).trim();
+  return `${from > 0 ? '…' : ''}${body}${to < text.length ? '…' : ''}`;
+}
