@@ -2,7 +2,7 @@ import type { AstroGlobal } from 'astro';
 import { EmailSchema, PasswordSchema } from '~/lib/schemas/people';
 import { emailTokenMisses } from './auth/rate-limit';
 import { blockedFor, countHit } from './auth/throttle';
-import { LINK_SENT, peekEmailLink, requestEmailLink, useEmailLink, type LinkPurpose } from './email-links';
+import { LINK_SENT, peekEmailLink, requestEmailLink, spendEmailLink, type LinkPurpose } from './email-links';
 import { HttpError } from './http';
 import { sessionCookieFor } from './session';
 
@@ -66,7 +66,7 @@ export async function openLinkPage(Astro: AstroGlobal, purpose: LinkPurpose): Pr
       if (form?.get('confirm') !== parsed.data) throw new HttpError(400, 'The two passwords differ; type the same one twice.');
       password = parsed.data;
     }
-    const userId = await useEmailLink(purpose, token, password);
+    const userId = await spendEmailLink(purpose, token, password);
     const cookie = await sessionCookieFor(userId, Astro.request);
     return { state: 'done', response: new Response(null, { status: 303, headers: { location: '/venues', 'set-cookie': cookie } }) };
   } catch (err) {

@@ -100,7 +100,7 @@ const DEAD_LINK = 'This link has been used or has expired. Ask for a new one on 
  * it, so two clicks make one sign-in. A reset sets the new password and raises the session
  * epoch, which signs out every other session of the person.
  */
-export async function useEmailLink(purpose: LinkPurpose, token: string, newPassword?: string): Promise<string> {
+export async function spendEmailLink(purpose: LinkPurpose, token: string, newPassword?: string): Promise<string> {
   if (!SECRET_TOKEN.test(token)) throw new HttpError(404, DEAD_LINK);
   const hash = tokenHash(token);
   const passwordHash = purpose === 'reset' && newPassword ? await hashPassword(newPassword) : null;
