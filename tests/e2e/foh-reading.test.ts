@@ -164,6 +164,18 @@ describe('the editor on a phone', () => {
   });
 });
 
+describe('the advance sheet', () => {
+  it('prints from its Print button under the strict content security policy', async () => {
+    const blocked: string[] = [];
+    page.on('console', (m) => { if (/Content Security Policy/i.test(m.text())) blocked.push(m.text()); });
+    await page.goto(`${server.url}/venues/${venue}/advance`);
+    await page.evaluate(() => { (window as unknown as { printed: number }).printed = 0; window.print = () => void (window as unknown as { printed: number }).printed++; });
+    await page.locator('button[data-print]').click();
+    expect(await page.evaluate(() => (window as unknown as { printed: number }).printed)).toBe(1);
+    expect(blocked).toEqual([]);
+  });
+});
+
 describe('signing in', () => {
   it('keeps the e-mail after a wrong password, with the password field ready', async () => {
     const fresh = await launchBrowser({ viewport: PHONE });
