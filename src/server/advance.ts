@@ -8,7 +8,7 @@ import { fileIdOfUrl } from '~/lib/file-url';
 import type { PmNode } from '~/lib/doc/types';
 import { recordAudit } from './audit';
 import { getDb, writeTx } from './db';
-import { availableFileIds } from './files/available-files';
+import { availableFiles } from './files/available-files';
 import { HttpError } from './http';
 import type { VenueRow } from './guard';
 import type { SessionUser } from './session';
@@ -50,7 +50,7 @@ export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = 
   const now = options.now ?? new Date();
   const docs = rows.map((r) => (r.doc ? (JSON.parse(r.doc) as PmNode) : null));
   const refs = docs.map((doc) => (doc ? fileIdsInDoc(doc) : new Set<string>()));
-  const available = await availableFileIds(venue.id, new Set(refs.flatMap((ids) => [...ids])));
+  const available = await availableFiles(venue.id, new Set(refs.flatMap((ids) => [...ids])));
   const traceIds = new Set(docs.flatMap((doc) => (doc ? traceIdsIn(doc) : [])));
   const traces = await loadVenueTraces(venue.id, [...traceIds].filter((id) => available.has(id)));
   const fileUrl = (id: string) => (options.imageUrl ? options.imageUrl(`/files/${id}`) : `/files/${id}`);
@@ -67,7 +67,7 @@ export async function loadAdvanceSheet(venue: VenueRow, options: SheetOptions = 
       checkedBy: r.checkedAt ? (r.checkedByName ?? 'a former member') : null,
       checkStale: isCheckStale(r.sectionSlug, r.checkedAt, now, venue.checkStaleMonths),
       fileIds,
-      html: doc ? renderDocHtml(doc, { isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''), imageUrl: options.imageUrl, blockContext: { traces, fileUrl } }) : '',
+      html: doc ? renderDocHtml(doc, { isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''), imageSize: (src) => available.get(fileIdOfUrl(src) ?? ''), idPrefix: `${r.slug}-`, imageUrl: options.imageUrl, blockContext: { traces, fileUrl } }) : '',
     };
   });
 }

@@ -1,8 +1,9 @@
 import type { PmNode } from '~/lib/doc/types';
 import { fileIdsInDoc, traceIdsIn } from '~/lib/doc/file-refs';
 import { renderDocHtml } from '~/lib/doc/render-html';
+import { headingOutline, type OutlineEntry } from '~/lib/doc/heading-outline';
 import { fileIdOfUrl } from '~/lib/file-url';
-import { availableFileIds } from './files/available-files';
+import { availableFiles, type FileSize } from './files/available-files';
 import { curveHrefFor } from './files/block-context';
 import { loadVenueTraces } from './files/trace-data';
 
@@ -24,6 +25,13 @@ interface Entry {
   /** Which of them were servable when `html` was rendered. */
   availableKey: string;
   html: string;
+  /** The headings, for the contents list above a long page. */
+  outline: OutlineEntry[];
+}
+
+export interface RenderedRevision {
+  html: string;
+  outline: OutlineEntry[];
 }
 
 const cache = new Map<string, Entry>();
@@ -35,32 +43,34 @@ export interface StoredRevision {
   doc: string;
 }
 
-export async function revisionHtml(venue: { id: string; slug: string }, pageSlug: string, revision: StoredRevision): Promise<string> {
+export async function revisionHtml(venue: { id: string; slug: string }, pageSlug: string, revision: StoredRevision): Promise<RenderedRevision> {
   const venueId = venue.id;
   const key = `${revision.id}|${venue.slug}/${pageSlug}`;
   const hit = cache.get(key);
   let parsed: PmNode | undefined;
   const referenced = hit?.referenced ?? fileIdsInDoc((parsed = JSON.parse(revision.doc) as PmNode));
-  const available = referenced.size ? await availableFileIds(venueId, referenced) : new Set<string>();
-  const availableKey = [...available].sort().join(',');
+  const available = referenced.size ? await availableFiles(venueId, referenced) : new Map<string, FileSize>();
+  const availableKey = [...available.keys()].sort().join(',');
   if (hit && hit.availableKey === availableKey) {
     // Re-inserting moves it to the young end of the Map's order.
     cache.delete(key);
     cache.set(key, hit);
-    return hit.html;
+    return { html: hit.html, outline: hit.outline };
   }
   parsed ??= JSON.parse(revision.doc) as PmNode;
   const traceIds = traceIdsIn(parsed).filter((id) => available.has(id));
   const traces = await loadVenueTraces(venueId, traceIds);
   const html = renderDocHtml(parsed, {
     isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''),
+    imageSize: (src) => available.get(fileIdOfUrl(src) ?? ''),
     blockContext: { traces, curveHref: curveHrefFor(venue.slug, pageSlug) },
   });
-  remember(key, { referenced, availableKey, html });
-  return html;
+  const outline = headingOutline(parsed);
+  remember(key, { referenced, availableKey, html, outline });
+  return { html, outline };
 }
 
-const sizeOf = (id: string, e: Entry) => e.html.length + id.length + e.availableKey.length;
+const sizeOf = (id: string, e: Entry) => e.html.length + id.length + e.availableKey.length + e.outline.reduce((n, h) => n + h.text.length + h.id.length, 0);
 
 function remember(id: string, entry: Entry): void {
   const old = cache.get(id);

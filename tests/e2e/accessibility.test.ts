@@ -9,6 +9,7 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { DEMO, TMP_ROOT } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
+import { signIn } from '../helpers/session';
 
 const WCAG_TAGS = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22a', 'wcag22aa'];
 const SIZES = { laptop: { width: 1280, height: 900 }, phone: { width: 390, height: 844 } } as const;
@@ -41,7 +42,10 @@ async function openAs(theme: (typeof THEMES)[number], size: keyof typeof SIZES, 
 }
 
 async function visit(page: Page, path: string, ready?: (page: Page) => Promise<unknown>): Promise<void> {
-  const res = await page.goto(`${server.url}${path}`, { waitUntil: 'networkidle' });
+  const res = await page.goto(`${server.url}${path}`, { waitUntil: 'load' });
+  // The advance sheet keeps fetching for offline use (its photos, via the service worker), so the
+  // network may not fall quiet; a few seconds is enough for anything that paints.
+  await page.waitForLoadState('networkidle', { timeout: 5000 }).catch(() => undefined);
   expect(res?.status(), path).toBeLessThan(500);
   if (ready) await ready(page);
 }
@@ -59,6 +63,11 @@ beforeAll(async () => {
   venue = (JSON.parse((await probe.textContent('body')) ?? '{}') as { venues: { slug: string }[] }).venues[0].slug;
   await probe.goto(`${server.url}/api/venues/${venue}/pages`);
   pageSlug = (JSON.parse((await probe.textContent('body')) ?? '{}') as { pages: { slug: string }[] }).pages[0].slug;
+  // A visiting engineer's view: the advance sheet through a guest pass, with no session.
+  const manager = await signIn(server.url, DEMO.manager);
+  const pass = await manager.sendJson('POST', `/api/venues/${venue}/passes`, { label: 'Accessibility check, touring act' });
+  expect(pass.status).toBe(201);
+  signedOutScreens.push(((await pass.json()) as { pass: { url: string } }).pass.url);
 });
 afterAll(async () => {
   for (const b of browsers) await b.close();
@@ -80,6 +89,14 @@ function signedInScreens(): [string, ((page: Page) => Promise<unknown>) | undefi
     [`/venues/${venue}/new`, (p) => p.getByTestId('editor').waitFor()],
     ['/search?q=stage', undefined],
     ['/admin/outbox', undefined],
+    // The people and advance-sheet screens.
+    [`/venues/${venue}/members`, undefined],
+    [`/venues/${venue}/passes`, undefined],
+    [`/venues/${venue}/audit`, undefined],
+    [`/venues/${venue}/advance`, undefined],
+    [`/venues/${venue}/advance/edit`, undefined],
+    [`/venues/${venue}/changes`, undefined],
+    ['/account', undefined],
   ];
 }
 

@@ -33,14 +33,47 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
       canRedo: e.can().redo(),
     }),
   });
+  const row = useRef<HTMLDivElement>(null);
+  // Entering a table brings its tools (now first) back into view on a phone's scrolling row.
+  useEffect(() => {
+    if (s.inTable && row.current) row.current.scrollLeft = 0;
+  }, [s.inTable]);
   const run = () => editor.chain().focus();
   const setBlock = (value: Block) => (value === 'p' ? run().setParagraph().run() : run().setHeading({ level: Number(value) as 1 | 2 | 3 | 4 }).run());
   const divider = <span aria-hidden="true" className="mx-1 h-6 w-px bg-line" />;
 
+  // In a table its tools come first, so on a phone they are in view without scrolling the row.
+  const tableTools = (
+    <>
+      <ToolButton label="Add a row below" onClick={() => run().addRowAfter().run()} testId="table-add-row">
+        + Row
+      </ToolButton>
+      <ToolButton label="Add a column to the right" onClick={() => run().addColumnAfter().run()} testId="table-add-column">
+        + Column
+      </ToolButton>
+      <ToolButton label="Remove this row" onClick={() => run().deleteRow().run()}>
+        − Row
+      </ToolButton>
+      <ToolButton label="Remove this column" onClick={() => run().deleteColumn().run()}>
+        − Column
+      </ToolButton>
+      <ToolButton label="Remove the whole table" onClick={() => run().deleteTable().run()} testId="table-delete">
+        ✕ Table
+      </ToolButton>
+      {divider}
+    </>
+  );
+  const tableInsert = (
+    <ToolButton label="Insert a table" onClick={() => run().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run()} testId="table-insert">
+      ▦ Table
+    </ToolButton>
+  );
+
   return (
     // On a phone the header wraps to two rows, so the toolbar sticks to the very top above it, in one scrolling row.
     <div className="sticky top-0 z-40 rounded-t-lg border border-b-0 border-line bg-surface sm:top-14 sm:z-20" data-testid="editor-toolbar">
-      <div role="toolbar" aria-label="Text formatting" className="flex items-center gap-1 overflow-x-auto p-1 sm:flex-wrap [&>*]:shrink-0">
+      <div ref={row} role="toolbar" aria-label="Text formatting" className="flex items-center gap-1 overflow-x-auto p-1 sm:flex-wrap [&>*]:shrink-0">
+        {s.inTable && tableTools}
         <label className="sr-only" htmlFor="tl-block-style">
           Text style
         </label>
@@ -85,29 +118,7 @@ export function EditorToolbar({ editor, photo }: { editor: Editor; photo: PhotoT
           <span aria-hidden="true">☐</span>&nbsp;Checklist
         </ToolButton>
         {divider}
-        {s.inTable ? (
-          <>
-            <ToolButton label="Add a row below" onClick={() => run().addRowAfter().run()} testId="table-add-row">
-              + Row
-            </ToolButton>
-            <ToolButton label="Add a column to the right" onClick={() => run().addColumnAfter().run()} testId="table-add-column">
-              + Column
-            </ToolButton>
-            <ToolButton label="Remove this row" onClick={() => run().deleteRow().run()}>
-              − Row
-            </ToolButton>
-            <ToolButton label="Remove this column" onClick={() => run().deleteColumn().run()}>
-              − Column
-            </ToolButton>
-            <ToolButton label="Remove the whole table" onClick={() => run().deleteTable().run()} testId="table-delete">
-              ✕ Table
-            </ToolButton>
-          </>
-        ) : (
-          <ToolButton label="Insert a table" onClick={() => run().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run()} testId="table-insert">
-            ▦ Table
-          </ToolButton>
-        )}
+        {!s.inTable && tableInsert}
         {divider}
         <ToolButton label="Insert an EQ block" onClick={() => run().insertContent({ type: EQ_BLOCK, attrs: newEqBlock() }).run()} testId="insert-eq">
           EQ

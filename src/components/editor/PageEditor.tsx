@@ -13,6 +13,7 @@ import { createPage, savePage, type CurrentRevision } from '~/components/api/pag
 import { PageFields } from './PageFields';
 import { SaveBar } from './SaveBar';
 import { useDraftAutosave } from './use-draft-autosave';
+import { useKeyboardInset } from './keyboard-inset';
 
 export interface PageEditorProps {
   venue: { slug: string; name: string };
@@ -53,8 +54,12 @@ export default function PageEditor({ venue, sections, page, current, mayUpload =
         role: 'textbox',
         'data-testid': 'editor',
       },
+      // The cursor is scrolled into view clear of the sticky toolbar above and the save bar below.
+      scrollMargin: { top: 72, bottom: 96, left: 8, right: 8 },
+      scrollThreshold: { top: 72, bottom: 96, left: 8, right: 8 },
     },
   });
+  useKeyboardInset();
   const blockVenue = useMemo(() => ({ venueSlug: venue.slug, pageSlug: page?.slug, mayUpload }), [venue.slug, page?.slug, mayUpload]);
   const drafts = useDraftAutosave(editor, venue.slug, pageKey, { base, title, section, summary });
 

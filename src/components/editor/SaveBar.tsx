@@ -16,16 +16,16 @@ interface Props {
 /** The one-line summary of the change and the save button, kept in reach at the bottom. */
 export function SaveBar({ summary, onSummary, onSave, saving, blocked, error, storageFailed, cancelHref, isNew }: Props) {
   return (
-    <div className="sticky bottom-0 z-20 -mx-4 border-t border-line bg-surface/95 px-4 py-3 backdrop-blur sm:mx-0 sm:rounded-lg sm:border">
+    <div className="sticky z-20 -mx-4 border-t border-line bg-surface/95 px-3 py-2 backdrop-blur sm:mx-0 sm:rounded-lg sm:border sm:px-4 sm:py-3" style={{ bottom: 'var(--tl-keyboard-inset, 0px)' }} data-testid="save-bar">
       <form
-        className="flex flex-wrap items-end gap-2"
+        className="flex items-end gap-2 sm:flex-wrap"
         onSubmit={(e) => {
           e.preventDefault();
           if (!blocked && !saving) onSave();
         }}
       >
-        <div className="min-w-0 flex-1 basis-56">
-          <label htmlFor="tl-summary" className="block text-sm font-semibold">
+        <div className="min-w-0 flex-1 sm:basis-56">
+          <label htmlFor="tl-summary" className="block text-sm font-semibold max-sm:sr-only">
             What changed <span className="font-normal text-muted">(one line, optional)</span>
           </label>
           <input
@@ -33,18 +33,18 @@ export function SaveBar({ summary, onSummary, onSave, saving, blocked, error, st
             value={summary}
             maxLength={SUMMARY_MAX}
             onChange={(e) => onSummary(e.target.value)}
-            placeholder={isNew ? 'First version' : 'e.g. New amp in rack B, patch updated'}
-            className="mt-1 min-h-11 w-full rounded-md border border-line bg-bg px-3"
+            placeholder={isNew ? 'First version' : 'What changed (optional)'}
+            className="min-h-11 w-full rounded-md border border-line bg-bg px-3 sm:mt-1"
             data-testid="summary-input"
           />
         </div>
-        <a href={cancelHref} className="inline-flex min-h-11 items-center rounded-md px-4 no-underline hover:bg-sunken">
+        <a href={cancelHref} className="inline-flex min-h-11 shrink-0 items-center rounded-md px-2 no-underline hover:bg-sunken sm:px-4">
           Cancel
         </a>
         <button
           type="submit"
           disabled={saving || blocked}
-          className="min-h-11 rounded-md bg-accent px-6 font-semibold text-accent-fg disabled:opacity-50"
+          className="min-h-11 shrink-0 rounded-md bg-accent px-4 font-semibold text-accent-fg disabled:opacity-50 sm:px-6"
           data-testid="save-page"
         >
           {saving ? 'Saving…' : isNew ? 'Create page' : 'Save'}

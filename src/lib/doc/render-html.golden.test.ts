@@ -33,7 +33,7 @@ interface Golden {
 
 const GOLDEN: Golden[] = [
   { name: 'paragraph', doc: doc(p(t('Stage box A'))), html: '<p>Stage box A</p>' },
-  ...HEADING_LEVELS.map((level) => ({ name: `heading ${level}`, doc: doc({ type: 'heading', attrs: { level }, content: [t('Power')] }), html: `<h${level}>Power</h${level}>` })),
+  ...HEADING_LEVELS.map((level) => ({ name: `heading ${level}`, doc: doc({ type: 'heading', attrs: { level }, content: [t('Power')] }), html: `<h${level} id="h-power">Power</h${level}>` })),
   { name: 'bold', doc: doc(p(t('x', [{ type: 'bold' }]))), html: '<p><strong>x</strong></p>' },
   { name: 'italic', doc: doc(p(t('x', [{ type: 'italic' }]))), html: '<p><em>x</em></p>' },
   { name: 'strike', doc: doc(p(t('x', [{ type: 'strike' }]))), html: '<p><s>x</s></p>' },
@@ -88,11 +88,11 @@ const GOLDEN: Golden[] = [
   { name: 'code block with a language', doc: doc({ type: 'codeBlock', attrs: { language: 'c++' }, content: [t('x')] }), html: '<pre><code class="language-c++">x</code></pre>' },
   { name: 'horizontal rule', doc: doc(p(t('a')), { type: 'horizontalRule' }, p(t('b'))), html: '<p>a</p><hr/><p>b</p>' },
   { name: 'hard break', doc: doc(p(t('line one'), { type: 'hardBreak' }, t('line two'))), html: '<p>line one<br/>line two</p>' },
-  { name: 'image', doc: doc({ type: 'image', attrs: { src: PHOTO, alt: 'Amp rack', title: null } }), html: `<img src="${PHOTO}" alt="Amp rack" loading="lazy"/>` },
+  { name: 'image', doc: doc({ type: 'image', attrs: { src: PHOTO, alt: 'Amp rack', title: null } }), html: `<figure class="photo"><a class="photo-open" href="/files/abcdefghijklmnop"><img src="${PHOTO}" alt="Amp rack" loading="lazy" decoding="async"/></a><figcaption>Amp rack</figcaption></figure>` },
   {
     name: 'image with title and size',
     doc: doc({ type: 'image', attrs: { src: PHOTO, alt: 'Rack', title: 'Rack "B"', width: 640, height: 480 } }),
-    html: `<img src="${PHOTO}" alt="Rack" title="Rack &quot;B&quot;" width="640" height="480" loading="lazy"/>`,
+    html: `<figure class="photo"><a class="photo-open" href="/files/abcdefghijklmnop"><img src="${PHOTO}" alt="Rack" title="Rack &quot;B&quot;" width="640" height="480" loading="lazy" decoding="async"/></a><figcaption>Rack &quot;B&quot;</figcaption></figure>`,
   },
   {
     name: 'table with header, spans and alignment',
@@ -104,7 +104,7 @@ const GOLDEN: Golden[] = [
       ),
     ),
     html:
-      '<div class="table-wrap"><table><tbody>' +
+      '<div class="table-wrap" role="region" aria-label="Table (scrolls sideways)" tabindex="0"><table><tbody>' +
       '<tr><th><p>Ch</p></th><th style="text-align: center;"><p>Source</p></th></tr>' +
       '<tr><td style="text-align: right;"><p>1</p></td><td rowspan="2"><p>Kick in</p></td></tr>' +
       '<tr><td colspan="2" style="text-align: left;"><p>2</p></td></tr>' +
@@ -126,12 +126,15 @@ const MEANINGFUL: Record<string, string[]> = {
 /**
  * A page's HTML reduced to what a reader gets from it: the meaningful tags with their meaningful
  * attributes (sorted, so order does not count) and the text. The read view's own differences are
- * taken out by name: its checkmark stands where the editor has a checkbox control, and column
- * widths (the editor's colgroup) are not kept, so tables fit a phone.
+ * taken out by name: its checkmark stands where the editor has a checkbox control, column
+ * widths (the editor's colgroup) are not kept, so tables fit a phone, and a photo is a figure
+ * whose link opens the whole file and whose caption repeats its title or description.
  */
 function meaning(html: string): string[] {
   const out: string[] = [];
-  const withoutMark = html.replace(/<span class="task-mark"[^>]*>[^<]*<\/span>/g, '');
+  const withoutMark = html
+    .replace(/<span class="task-mark"[^>]*>[^<]*<\/span>/g, '')
+    .replace(/<figure class="photo"><a class="photo-open"[^>]*>(<img[^>]*>)<\/a>(<figcaption>[^<]*<\/figcaption>)?<\/figure>/g, '$1');
   for (const m of withoutMark.matchAll(/<(\/?)([a-z0-9]+)([^>]*?)\/?>|([^<]+)/g)) {
     const [, closing, tag, rest, text] = m;
     if (text !== undefined) {

@@ -3,6 +3,8 @@ import { escapeHtml } from './escape-html';
 import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
 import { blockPlainText, processorBlockRenderers, type BlockContext } from './render-blocks';
+import { headingOutline } from './heading-outline';
+import { fileIdOfUrl } from '~/lib/file-url';
 
 /**
  * Renders a stored page document to HTML for the read view, on the server, with no editor code.
@@ -31,6 +33,16 @@ export interface RenderOptions {
    * guest view points images at its own pass-scoped file route instead of /files/….
    */
   imageUrl?: (src: string) => string;
+  /**
+   * A photo's stored pixel size, so the read view reserves its space before it loads. Used when
+   * the node itself carries no size (photos placed before sizes were kept).
+   */
+  imageSize?: (src: string) => { width: number | null; height: number | null } | undefined;
+}
+
+/** What the renderer carries from one node to the next: the heading ids, in reading order. */
+interface RenderState {
+  headingIds: string[];
 }
 
 const SIMPLE_BLOCKS: Record<string, string> = {
@@ -117,6 +129,7 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
 
 export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
   const options = { ...given, blocks: { ...processorBlockRenderers(given.idPrefix, given.blockContext), ...given.blocks } };
+  const state: RenderState = { headingIds: headingOutline(doc, given.idPrefix ?? '').map((h) => h.id) };
   const out: string[] = [];
   // Iterative, so a deeply nested stored document cannot overflow the stack.
   const stack: (PmNode | { close: string })[] = [doc];
@@ -126,7 +139,7 @@ export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
       out.push(item.close);
       continue;
     }
-    const [open, close] = tagsFor(item, options);
+    const [open, close] = tagsFor(item, options, state);
     out.push(open);
     stack.push({ close });
     if (open.endsWith('/>') || item.type === 'text' || options.blocks?.[item.type]) continue;
@@ -136,7 +149,7 @@ export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
   return out.join('');
 }
 
-function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
+function tagsFor(node: PmNode, options: RenderOptions, state: RenderState): [string, string] {
   const custom = options.blocks?.[node.type];
   if (custom) return [custom(node), ''];
   const simple = SIMPLE_BLOCKS[node.type];
@@ -148,7 +161,9 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
       return [renderMarks(node.text ?? '', node.marks), ''];
     case 'heading': {
       const level = clampInt(node.attrs?.level, 1, 4, 2);
-      return [`<h${level}>`, `</h${level}>`];
+      // Ids in the order headingOutline() found them, so the contents list's links land here.
+      const id = state.headingIds.shift();
+      return [`<h${level}${id ? attr('id', id) : ''}>`, `</h${level}>`];
     }
     case 'orderedList': {
       const start = (accepted(node, 'start') as number | undefined) ?? 1;
@@ -173,7 +188,8 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
     case 'hardBreak':
       return ['<br/>', ''];
     case 'table':
-      return ['<div class="table-wrap"><table><tbody>', '</tbody></table></div>'];
+      // The wrapper scrolls sideways on a phone; as a focusable region a keyboard can scroll it too.
+      return ['<div class="table-wrap" role="region" aria-label="Table (scrolls sideways)" tabindex="0"><table><tbody>', '</tbody></table></div>'];
     case 'tableHeader':
     case 'tableCell': {
       const tag = node.type === 'tableHeader' ? 'th' : 'td';
@@ -191,15 +207,33 @@ function tagsFor(node: PmNode, options: RenderOptions): [string, string] {
         return [`<span class="missing-photo" role="note">Photo removed${alt ? `: ${escapeHtml(alt)}` : ''}</span>`, ''];
       }
       const title = typeof node.attrs?.title === 'string' ? node.attrs.title : '';
-      const width = accepted(node, 'width');
-      const height = accepted(node, 'height');
+      const stored = options.imageSize?.(src);
+      const width = accepted(node, 'width') ?? stored?.width ?? undefined;
+      const height = accepted(node, 'height') ?? stored?.height ?? undefined;
       const size = `${width ? attr('width', width as number) : ''}${height ? attr('height', height as number) : ''}`;
-      return [`<img${attr('src', options.imageUrl ? options.imageUrl(src) : src)}${attr('alt', alt)}${title ? attr('title', title) : ''}${size} loading="lazy"/>`, ''];
+      const url = (u: string) => (options.imageUrl ? options.imageUrl(u) : u);
+      const img = `<img${attr('src', url(src))}${attr('alt', alt)}${title ? attr('title', title) : ''}${size} loading="lazy" decoding="async"/>`;
+      // A photo reads as a figure: its caption shown under it, and a tap opens the whole file.
+      const caption = photoCaption(title, alt);
+      const full = `/files/${fileIdOfUrl(src)}`;
+      return [
+        `<figure class="photo"><a class="photo-open"${attr('href', url(full))}>${img}</a>${caption ? `<figcaption>${escapeHtml(caption)}</figcaption>` : ''}</figure>`,
+        '',
+      ];
     }
     default:
       // Unknown nodes keep their text but lose their markup.
       return ['', ''];
   }
+}
+
+/** A file name left as the description (IMG_2041.jpg) is no caption worth showing. */
+const FILE_NAME = /^[\w .()-]+\.(jpe?g|png|webp|gif|avif|heic|heif|tiff?)$/i;
+
+/** The caption shown under a photo: its title when set, else its description unless that is just the file's name. */
+export function photoCaption(title: string, alt: string): string {
+  if (title.trim()) return title.trim();
+  return FILE_NAME.test(alt.trim()) ? '' : alt.trim();
 }
 
 const BLOCK_BREAK = new Set(['paragraph', 'heading', 'listItem', 'taskItem', 'tableRow', 'codeBlock', 'blockquote']);
