@@ -57,7 +57,7 @@ let signedOutScreens: string[];
 beforeAll(async () => {
   server = await startServer();
   const offline = (await (await fetch(`${server.url}/calc/offline-pages.json`)).json()) as { pages: string[] };
-  signedOutScreens = ['/signin', '/no-such-page', ...offline.pages];
+  signedOutScreens = ['/signin', '/signin/link', '/signin/forgot', '/no-such-page', ...offline.pages];
   const probe = await openAs('light', 'laptop', DEMO.manager);
   await probe.goto(`${server.url}/api/venues`);
   venue = (JSON.parse((await probe.textContent('body')) ?? '{}') as { venues: { slug: string }[] }).venues[0].slug;
