@@ -60,12 +60,14 @@ export async function revisionHtml(venue: { id: string; slug: string }, pageSlug
   parsed ??= JSON.parse(revision.doc) as PmNode;
   const traceIds = traceIdsIn(parsed).filter((id) => available.has(id));
   const traces = await loadVenueTraces(venueId, traceIds);
+  // Found once: the renderer numbers the headings from it and the contents list shows it.
+  const outline = headingOutline(parsed);
   const html = renderDocHtml(parsed, {
+    outline,
     isImageAvailable: (src) => available.has(fileIdOfUrl(src) ?? ''),
     imageSize: (src) => available.get(fileIdOfUrl(src) ?? ''),
     blockContext: { traces, curveHref: curveHrefFor(venue.slug, pageSlug) },
   });
-  const outline = headingOutline(parsed);
   remember(key, { referenced, availableKey, html, outline });
   return { html, outline };
 }

@@ -1,3 +1,4 @@
+import { slugify } from '~/lib/slug';
 import type { PmNode } from './types';
 
 /** One heading of a page, for the contents list and the jump links. */
@@ -6,17 +7,6 @@ export interface OutlineEntry {
   text: string;
   /** The id the read view gives the heading, unique within one rendered page. */
   id: string;
-}
-
-/** Letters and digits of any script, lower-cased, joined by single hyphens. */
-function slugOf(text: string): string {
-  return text
-    .normalize('NFKD')
-    .replace(/\p{M}/gu, '')
-    .toLowerCase()
-    .replace(/[^\p{L}\p{N}]+/gu, '-')
-    .replace(/^-+|-+$/g, '')
-    .slice(0, 60);
 }
 
 function textOf(node: PmNode): string {
@@ -39,7 +29,7 @@ export function headingOutline(doc: PmNode, prefix = ''): OutlineEntry[] {
     const node = stack.pop()!;
     if (node.type === 'heading') {
       const text = textOf(node).replace(/\s+/g, ' ').trim();
-      const base = `${prefix}h-${slugOf(text) || 'section'}`;
+      const base = `${prefix}h-${slugify(text) || 'section'}`;
       const n = (seen.get(base) ?? 0) + 1;
       seen.set(base, n);
       const level = Number(node.attrs?.level);

@@ -3,7 +3,7 @@ import { escapeHtml } from './escape-html';
 import { isOwnFileUrl, linkKind } from './safe-url';
 import type { PmMark, PmNode } from './types';
 import { blockPlainText, processorBlockRenderers, type BlockContext } from './render-blocks';
-import { headingOutline } from './heading-outline';
+import { headingOutline, type OutlineEntry } from './heading-outline';
 import { fileIdOfUrl } from '~/lib/file-url';
 
 /**
@@ -38,6 +38,8 @@ export interface RenderOptions {
    * the node itself carries no size (photos placed before sizes were kept).
    */
   imageSize?: (src: string) => { width: number | null; height: number | null } | undefined;
+  /** The document's headingOutline(), when the caller already has it (the read cache keeps it). */
+  outline?: OutlineEntry[];
 }
 
 /** What the renderer carries from one node to the next: the heading ids, in reading order. */
@@ -129,7 +131,7 @@ function renderMarks(text: string, marks: PmMark[] | undefined): string {
 
 export function renderDocHtml(doc: PmNode, given: RenderOptions = {}): string {
   const options = { ...given, blocks: { ...processorBlockRenderers(given.idPrefix, given.blockContext), ...given.blocks } };
-  const state: RenderState = { headingIds: headingOutline(doc, given.idPrefix ?? '').map((h) => h.id) };
+  const state: RenderState = { headingIds: (given.outline ?? headingOutline(doc, given.idPrefix ?? '')).map((h) => h.id) };
   const out: string[] = [];
   // Iterative, so a deeply nested stored document cannot overflow the stack.
   const stack: (PmNode | { close: string })[] = [doc];

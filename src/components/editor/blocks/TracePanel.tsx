@@ -79,6 +79,17 @@ export function TracePanel({ traces, compare, onChange, testId }: Props) {
     setTraces(list, before && after && before !== after ? { before, after } : null);
   };
 
+  // Both ends of the comparison choose from the same list.
+  const compareOptions = (
+    <>
+      <option value="">No comparison</option>
+      {list.map((t, i) => (
+        <option key={t.fileId} value={t.fileId}>
+          {traceName(t, i)}
+        </option>
+      ))}
+    </>
+  );
   return (
     <fieldset className="mt-3 rounded-md border border-line p-2" data-testid={`${testId}-traces`}>
       <legend className="px-1 text-sm font-semibold">Measured traces</legend>
@@ -180,23 +191,13 @@ export function TracePanel({ traces, compare, onChange, testId }: Props) {
           <label className="flex flex-col text-xs font-semibold" htmlFor={beforeId}>
             Before
             <select id={beforeId} className={field} value={pairBefore} onChange={(e) => setPair(e.target.value, pairAfter)} data-testid={`${testId}-compare-before`}>
-              <option value="">No comparison</option>
-              {list.map((t, i) => (
-                <option key={t.fileId} value={t.fileId}>
-                  {traceName(t, i)}
-                </option>
-              ))}
+              {compareOptions}
             </select>
           </label>
           <label className="flex flex-col text-xs font-semibold" htmlFor={afterId}>
             After
             <select id={afterId} className={field} value={pairAfter} onChange={(e) => setPair(pairBefore, e.target.value)} data-testid={`${testId}-compare-after`}>
-              <option value="">No comparison</option>
-              {list.map((t, i) => (
-                <option key={t.fileId} value={t.fileId}>
-                  {traceName(t, i)}
-                </option>
-              ))}
+              {compareOptions}
             </select>
           </label>
           {pairBefore && pairAfter && pairBefore === pairAfter && <p className="text-xs text-danger">Pick two different traces.</p>}
