@@ -1,0 +1,1 @@
+export declare function acceptedWithoutBrotli(header: string): string;
