@@ -3,6 +3,8 @@ import { dirname, resolve } from 'node:path';
 import { createClient, type Client } from '@libsql/client';
 import { drizzle, type LibSQLDatabase } from 'drizzle-orm/libsql';
 import * as schema from './schema';
+// Before any connection prepares a statement: reuse them (see the module for why it is safe).
+import './statement-cache';
 
 export type Db = LibSQLDatabase<typeof schema> & { $client: Client };
 
