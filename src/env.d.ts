@@ -10,6 +10,8 @@ declare namespace App {
     /** Whoever is asking: the guest when a pass is presented, else the signed-in person. */
     /** The venue a page's guard loaded, for the header's account menu. */
     venueHere?: { slug: string; access: import('./lib/permissions').VenueAccess };
+    /** Set by a page that may be kept whole (src/server/page-render-cache.ts): its render key. */
+    renderKey?: string;
     principal: import('./server/session').SessionUser | import('./server/guest-passes').ResolvedPass | null;
   }
 }

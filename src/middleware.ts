@@ -5,6 +5,7 @@ import { resolvePass, type ResolvedPass } from './server/guest-passes';
 import { readSessionUser } from './server/session';
 import { completePagePolicy, securityHeaders } from './server/security-headers';
 import { foreignOriginRefusal } from './server/origin-check';
+import { keepRenderedPage } from './server/page-render-cache';
 
 /** Paths that never depend on who is asking; reading the session there is wasted work. */
 function isAnonymousPath(pathname: string): boolean {
@@ -94,7 +95,8 @@ export const onRequest = defineMiddleware(async (context, next) => {
       context.locals.principal = live ?? NO_VENUE_GUEST;
     }
   }
-  const response = await next();
+  let response = await next();
+  if (context.locals.renderKey) response = await keepRenderedPage(context.locals.renderKey, response);
   const onGuestPath = GUEST_PATH.test(pathname);
   const extra: Record<string, string> = onGuestPath ? { 'referrer-policy': 'no-referrer', 'x-robots-tag': 'noindex, nofollow' } : {};
   const force: Record<string, string> = {};

@@ -6,6 +6,7 @@
 
 const DATE_TIME = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+const DAY_UTC = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeZone: 'UTC' });
 
 /** A Date, an ISO 8601 string (as JSON carries dates) or milliseconds since 1970. */
 export type Moment = Date | string | number;
@@ -20,4 +21,9 @@ export function formatDateTime(when: Moment): string {
 /** "3 Dec 2026": for lists where the day is enough. */
 export function formatDate(when: Moment): string {
   return DATE.format(toDate(when));
+}
+
+/** "3 Dec 2026" as the day in UTC: for stamps the server stores as a day (checked on site). */
+export function formatDayUtc(when: Moment): string {
+  return DAY_UTC.format(toDate(when));
 }

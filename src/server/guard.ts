@@ -1,6 +1,7 @@
 import { and, eq, sql, type SQL } from 'drizzle-orm';
 import { memberships, venues } from '~/db/schema';
 import { can, isGuest, isMember, readScope, refusalMessage, type Action, type Guest, type Principal, type Role, type VenueAccess } from '~/lib/permissions';
+import type { Db } from '~/db/client';
 import { getDb } from './db';
 import { HttpError } from './http';
 import type { SessionUser } from './session';
@@ -53,6 +54,8 @@ export interface VenueRow {
 export interface VenueContext {
   venue: VenueRow;
   access: VenueAccess;
+  /** When the member's current visit began (null before the first); absent for non-members. */
+  visitStartedAt?: Date | null;
 }
 
 const NOT_FOUND = 'There is no such venue, or you are not a member of it.';
@@ -64,23 +67,38 @@ const NOT_FOUND = 'There is no such venue, or you are not a member of it.';
  */
 export async function loadVenue(principal: SessionUser | Guest, venueSlug: string | undefined): Promise<VenueContext> {
   if (!venueSlug || venueSlug.length > 100) throw new HttpError(404, NOT_FOUND);
-  const db = await getDb();
+  venueQuery ??= buildVenueQuery(await getDb());
   const userId = isMember(principal) ? principal.id : '';
-  const rows = await db
-    .select({ id: venues.id, slug: venues.slug, name: venues.name, town: venues.town, checkStaleMonths: venues.checkStaleMonths, role: memberships.role })
-    .from(venues)
-    .leftJoin(memberships, and(eq(memberships.venueId, venues.id), eq(memberships.userId, userId)))
-    .where(eq(venues.slug, venueSlug))
-    .limit(1);
-  const row = rows[0];
+  const row = (await venueQuery.all({ userId, slug: venueSlug }))[0];
   if (!row) throw new HttpError(404, NOT_FOUND);
-  const { role, ...venue } = row;
+  const { role, visitStartedAt, ...venue } = row;
   if (isGuest(principal)) {
     if (principal.venueId !== venue.id) throw new HttpError(404, NOT_FOUND);
     return { venue, access: { role: null, venueId: venue.id } };
   }
   if (!role && !principal.isAdmin) throw new HttpError(404, NOT_FOUND);
-  return { venue, access: { role: (role as Role | null) ?? null, venueId: venue.id } };
+  return { venue, access: { role: (role as Role | null) ?? null, venueId: venue.id }, ...(role ? { visitStartedAt } : {}) };
+}
+
+/** Built once: every venue-scoped request runs it. The member's visit comes along for noteVisit. */
+let venueQuery: ReturnType<typeof buildVenueQuery> | undefined;
+
+function buildVenueQuery(db: Db) {
+  return db
+    .select({
+      id: venues.id,
+      slug: venues.slug,
+      name: venues.name,
+      town: venues.town,
+      checkStaleMonths: venues.checkStaleMonths,
+      role: memberships.role,
+      visitStartedAt: memberships.visitStartedAt,
+    })
+    .from(venues)
+    .leftJoin(memberships, and(eq(memberships.venueId, venues.id), eq(memberships.userId, sql.placeholder('userId'))))
+    .where(eq(venues.slug, sql.placeholder('slug')))
+    .limit(1)
+    .prepare();
 }
 
 export function requirePermission(principal: Principal, action: Action, access?: VenueAccess | null): void {

@@ -82,16 +82,21 @@ const VISIT_GAP_MS = 30 * 60 * 1000;
  * Starts a new visit when the last one began more than 30 minutes ago; the previous start becomes
  * "your last visit" for the changed-since view. At most one write per member per half hour.
  */
-export async function noteVisit(venueId: string, userId: string): Promise<void> {
-  const db = await getDb();
-  const [row] = await db.select({ visitStartedAt: memberships.visitStartedAt }).from(memberships).where(and(eq(memberships.venueId, venueId), eq(memberships.userId, userId))).limit(1);
-  if (!row) return;
+export async function noteVisit(venueId: string, userId: string, knownVisitStart?: Date | null): Promise<void> {
+  // The venue guard has usually read the visit already (with the membership); read it only if not.
+  let visitStartedAt = knownVisitStart;
+  if (visitStartedAt === undefined) {
+    const db = await getDb();
+    const [row] = await db.select({ visitStartedAt: memberships.visitStartedAt }).from(memberships).where(and(eq(memberships.venueId, venueId), eq(memberships.userId, userId))).limit(1);
+    if (!row) return;
+    visitStartedAt = row.visitStartedAt;
+  }
   const now = Date.now();
-  if (row.visitStartedAt && now - row.visitStartedAt.getTime() < VISIT_GAP_MS) return;
+  if (visitStartedAt && now - visitStartedAt.getTime() < VISIT_GAP_MS) return;
   await writeTx((tx) =>
     tx
       .update(memberships)
-      .set({ lastVisitAt: row.visitStartedAt ?? null, visitStartedAt: new Date(now) })
+      .set({ lastVisitAt: visitStartedAt ?? null, visitStartedAt: new Date(now) })
       .where(and(eq(memberships.venueId, venueId), eq(memberships.userId, userId))),
   );
 }

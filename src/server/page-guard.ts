@@ -16,7 +16,7 @@ export type PageGuardResult =
 export async function guardVenuePage(Astro: AstroGlobal, action: Action): Promise<PageGuardResult> {
   try {
     const ctx = await guardVenue(Astro.locals.principal, Astro.params.venue, action);
-    if (ctx.access.role) await noteVisit(ctx.venue.id, ctx.user.id);
+    if (ctx.access.role) await noteVisit(ctx.venue.id, ctx.user.id, ctx.visitStartedAt);
     Astro.locals.venueHere = { slug: ctx.venue.slug, access: ctx.access };
     return { ok: true, ctx };
   } catch (err) {

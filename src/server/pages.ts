@@ -1,4 +1,4 @@
-import { and, eq, like, or } from 'drizzle-orm';
+import { and, eq, like, or, sql } from 'drizzle-orm';
 import { pages, revisions, sections, users } from '~/db/schema';
 import type { PageJson } from '~/lib/api-types';
 import type { PmNode } from '~/lib/doc/types';
@@ -6,6 +6,7 @@ import type { PageCreate } from '~/lib/schemas/page';
 import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Reader, type Tx } from './db';
+import type { Db } from '~/db/client';
 import type { Action } from '~/lib/permissions';
 import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from './guard';
 import { HttpError } from './http';
@@ -20,12 +21,8 @@ const PAGE_NOT_FOUND = 'There is no such page in this venue.';
 /** Page slugs that would be shadowed by a fixed route under /venues/:venue/. */
 export const RESERVED_PAGE_SLUGS = new Set(['new', 'sections', 'files', 'advance', 'members', 'audit', 'settings', 'history', 'edit', 'search', 'changes', 'print']);
 
-/**
- * A page of a venue with its current revision, the document still as its stored JSON text (the
- * read view renders from a cache keyed by revision and often never needs it parsed); 404 when
- * the slug is not a page of this venue.
- */
-export async function loadPageWithCurrentText(venueId: string, pageSlug: string | undefined) {
+/** A page of a venue with its current revision, document parsed; 404 when the slug is not a page of this venue. */
+export async function loadPageWithCurrent(venueId: string, pageSlug: string | undefined) {
   if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
   const db = await getDb();
   const rows = await db
@@ -47,14 +44,60 @@ export async function loadPageWithCurrentText(venueId: string, pageSlug: string 
   return {
     page: row.page,
     section: { slug: row.sectionSlug, title: row.sectionTitle },
-    revision: row.revision ? { ...row.revision, authorName: row.authorName ?? FORMER_MEMBER } : null,
+    revision: row.revision ? { ...row.revision, authorName: row.authorName ?? FORMER_MEMBER, doc: JSON.parse(row.revision.doc) as PmNode } : null,
   };
 }
 
-/** A page of a venue with its current revision, document parsed; 404 as above. */
-export async function loadPageWithCurrent(venueId: string, pageSlug: string | undefined) {
-  const { revision, ...rest } = await loadPageWithCurrentText(venueId, pageSlug);
-  return { ...rest, revision: revision ? { ...revision, doc: JSON.parse(revision.doc) as PmNode } : null };
+/** The read view's query, built once: it runs on every page read. */
+let readingQuery: ReturnType<typeof buildReadingQuery> | undefined;
+
+function buildReadingQuery(db: Db) {
+  return db
+    .select({
+      page: pages,
+      sectionSlug: sections.slug,
+      sectionTitle: sections.title,
+      revisionId: revisions.id,
+      revisionNumber: revisions.number,
+      summary: revisions.summary,
+      createdAt: revisions.createdAt,
+      authorName: users.name,
+    })
+    .from(pages)
+    .innerJoin(sections, eq(sections.id, pages.sectionId))
+    .leftJoin(revisions, and(eq(revisions.pageId, pages.id), eq(revisions.number, pages.currentRevision)))
+    .leftJoin(users, eq(users.id, revisions.authorId))
+    .where(and(eq(pages.venueId, sql.placeholder('venueId')), eq(pages.slug, sql.placeholder('slug'))))
+    .limit(1)
+    .prepare();
+}
+
+/**
+ * A page of a venue and what the read view says of its current revision, without the document:
+ * the body comes from the rendered-revision cache, which asks for the document (revisionDoc)
+ * only when it misses. 404 as above.
+ */
+export async function loadPageForReading(venueId: string, pageSlug: string | undefined) {
+  if (!pageSlug || pageSlug.length > 100) throw new HttpError(404, PAGE_NOT_FOUND);
+  readingQuery ??= buildReadingQuery(await getDb());
+  const row = (await readingQuery.all({ venueId, slug: pageSlug }))[0];
+  if (!row) throw new HttpError(404, PAGE_NOT_FOUND);
+  return {
+    page: row.page,
+    section: { slug: row.sectionSlug, title: row.sectionTitle },
+    revision:
+      row.revisionId !== null && row.revisionNumber !== null && row.createdAt !== null
+        ? { id: row.revisionId, number: row.revisionNumber, summary: row.summary ?? '', createdAt: row.createdAt, authorName: row.authorName ?? FORMER_MEMBER }
+        : null,
+  };
+}
+
+/** The stored JSON text of one revision's document. */
+export async function revisionDoc(revisionId: string): Promise<string> {
+  const db = await getDb();
+  const [row] = await db.select({ doc: revisions.doc }).from(revisions).where(eq(revisions.id, revisionId)).limit(1);
+  if (!row) throw new HttpError(404, PAGE_NOT_FOUND);
+  return row.doc;
 }
 
 export type LoadedPage = Awaited<ReturnType<typeof loadPageWithCurrent>>;

@@ -32,32 +32,32 @@ interface Entry {
 export interface RenderedRevision {
   html: string;
   outline: OutlineEntry[];
+  /** Names exactly what `html` was made from (revision, address, servable files): equal versions, equal HTML. */
+  version: string;
 }
 
 const cache = new Map<string, Entry>();
 let cachedChars = 0;
 
-export interface StoredRevision {
-  id: string;
-  /** The stored JSON text of the document. */
-  doc: string;
-}
-
-export async function revisionHtml(venue: { id: string; slug: string }, pageSlug: string, revision: StoredRevision): Promise<RenderedRevision> {
+/**
+ * `loadDoc` reads the revision's stored JSON text; it is called only on a miss, so a cached read
+ * never moves the document (often the largest column in the database) out of SQLite.
+ */
+export async function revisionHtml(venue: { id: string; slug: string }, pageSlug: string, revisionId: string, loadDoc: () => Promise<string>): Promise<RenderedRevision> {
   const venueId = venue.id;
-  const key = `${revision.id}|${venue.slug}/${pageSlug}`;
+  const key = `${revisionId}|${venue.slug}/${pageSlug}`;
   const hit = cache.get(key);
   let parsed: PmNode | undefined;
-  const referenced = hit?.referenced ?? fileIdsInDoc((parsed = JSON.parse(revision.doc) as PmNode));
+  const referenced = hit?.referenced ?? fileIdsInDoc((parsed = JSON.parse(await loadDoc()) as PmNode));
   const available = referenced.size ? await availableFiles(venueId, referenced) : new Map<string, FileSize>();
   const availableKey = [...available.keys()].sort().join(',');
   if (hit && hit.availableKey === availableKey) {
     // Re-inserting moves it to the young end of the Map's order.
     cache.delete(key);
     cache.set(key, hit);
-    return { html: hit.html, outline: hit.outline };
+    return { html: hit.html, outline: hit.outline, version: `${key}#${availableKey}` };
   }
-  parsed ??= JSON.parse(revision.doc) as PmNode;
+  parsed ??= JSON.parse(await loadDoc()) as PmNode;
   const traceIds = traceIdsIn(parsed).filter((id) => available.has(id));
   const traces = await loadVenueTraces(venueId, traceIds);
   // Found once: the renderer numbers the headings from it and the contents list shows it.
@@ -69,7 +69,7 @@ export async function revisionHtml(venue: { id: string; slug: string }, pageSlug
     blockContext: { traces, curveHref: curveHrefFor(venue.slug, pageSlug) },
   });
   remember(key, { referenced, availableKey, html, outline });
-  return { html, outline };
+  return { html, outline, version: `${key}#${availableKey}` };
 }
 
 const sizeOf = (id: string, e: Entry) => e.html.length + id.length + e.availableKey.length + e.outline.reduce((n, h) => n + h.text.length + h.id.length, 0);

@@ -67,6 +67,18 @@ async function decodeSession(request: Request, cookieName: string, secure: boole
   return validUntilMs > Date.now() ? session : null;
 }
 
+/** Built once: every signed-in request runs it. */
+let sessionUserQuery: ReturnType<typeof buildSessionUserQuery> | undefined;
+type BuiltDb = Awaited<ReturnType<typeof getDb>>;
+function buildSessionUserQuery(db: BuiltDb) {
+  return db
+    .select({ id: users.id, email: users.email, name: users.name, isAdmin: users.isAdmin, sessionEpoch: users.sessionEpoch })
+    .from(users)
+    .where(eq(users.id, sql.placeholder('id')))
+    .limit(1)
+    .prepare();
+}
+
 /**
  * Reads the Auth.js session cookie directly (decrypting the JWT) rather than through a full
  * Auth.js request per page, and loads the person fresh from the database so a removed account
@@ -78,11 +90,8 @@ export async function readSessionUser(request: Request): Promise<SessionUser | n
   if (!request.headers.get('cookie')?.includes(cookieName)) return null;
   const session = await decodeSession(request, cookieName, secure);
   if (!session) return null;
-  const db = await getDb();
-  const row = await db.query.users.findFirst({
-    where: eq(users.id, session.sub),
-    columns: { id: true, email: true, name: true, isAdmin: true, sessionEpoch: true },
-  });
+  sessionUserQuery ??= buildSessionUserQuery(await getDb());
+  const row = (await sessionUserQuery.all({ id: session.sub }))[0];
   if (!row) return null;
   // A cookie issued before the last sign-out, password change or removal is refused here.
   if (session.epoch !== row.sessionEpoch) return null;

@@ -116,6 +116,73 @@ describe('the read view never serves a stale revision', () => {
   });
 });
 
+/**
+ * The read view is also kept whole, keyed by everything it shows; these change what it shows
+ * without a new revision, so each must still be visible on the next request.
+ */
+describe('the whole kept page never outlives what it shows', () => {
+  const nameOf = async (email: string) => String((await sql('select name from users where email = ?', [email])).rows[0].name);
+
+  it('two people reading the same page each see their own name in the header', async () => {
+    const { page } = await createTestPage(engineer, venue, 'Cache two readers', doc(para('Shared words.')));
+    await warm(viewer, page.slug);
+    const asEngineer = await read(engineer, page.slug);
+    expect(asEngineer).toContain(`data-account-name="${await nameOf(DEMO.engineer)}"`);
+    expect(asEngineer).not.toContain(`data-account-name="${await nameOf(DEMO.viewer)}"`);
+  });
+
+  it('a renamed reader, author, page or venue shows on the next read', async () => {
+    const { page } = await createTestPage(engineer, venue, 'Cache renames', doc(para('Names everywhere.')));
+    await warm(viewer, page.slug);
+    const viewerName = await nameOf(DEMO.viewer);
+    const engineerName = await nameOf(DEMO.engineer);
+    const venueName = String((await sql('select name from venues where slug = ?', [venue])).rows[0].name);
+    try {
+      await sql('update users set name = ? where email = ?', ['Reader Renamed', DEMO.viewer]);
+      expect(await read(viewer, page.slug)).toContain('data-account-name="Reader Renamed"');
+      await sql('update users set name = ? where email = ?', ['Author Renamed', DEMO.engineer]);
+      expect(await read(viewer, page.slug)).toContain('by Author Renamed');
+      await sql('update pages set title = ? where slug = ?', ['Cache renames, retitled', page.slug]);
+      expect(await read(viewer, page.slug)).toContain('Cache renames, retitled');
+      await sql('update venues set name = ? where slug = ?', ['Renamed Hall', venue]);
+      expect(await read(viewer, page.slug)).toContain('Renamed Hall');
+    } finally {
+      await sql('update users set name = ? where email = ?', [viewerName, DEMO.viewer]);
+      await sql('update users set name = ? where email = ?', [engineerName, DEMO.engineer]);
+      await sql('update venues set name = ? where slug = ?', [venueName, venue]);
+    }
+  });
+
+  it('marking a page checked on site and putting it on the advance sheet show on the next read', async () => {
+    const { page } = await createTestPage(engineer, venue, 'Cache stamps', doc(para('Check me.')));
+    expect(await warm(viewer, page.slug)).toContain('Not yet checked on site');
+    expect((await engineer.sendJson('POST', `/api/venues/${venue}/pages/${page.slug}/check`, {})).status).toBeLessThan(300);
+    expect(await read(viewer, page.slug)).toContain('Checked on site');
+    const manager = await signIn(server.url, DEMO.manager);
+    expect(await warm(manager, page.slug)).toContain('Put on the advance sheet');
+    expect((await manager.sendJson('PUT', `/api/venues/${venue}/pages/${page.slug}/advance`, { included: true })).status).toBeLessThan(300);
+    expect(await read(manager, page.slug)).toContain('Take off the advance sheet');
+  });
+
+  it('sends the kept page gzipped to a browser that takes gzip, equal to the plain one', async () => {
+    const { page } = await createTestPage(engineer, venue, 'Cache packed', doc(para('Packed once.')));
+    const plain = await warm(viewer, page.slug);
+    const { request } = await import('node:http');
+    const { gunzipSync } = await import('node:zlib');
+    const packed = await new Promise<{ encoding?: string; body: Buffer }>((resolve, reject) => {
+      const req = request(`${server.url}/venues/${venue}/${page.slug}`, { headers: { cookie: viewer.jar.header(), 'accept-encoding': 'gzip, br' } }, (res) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => resolve({ encoding: res.headers['content-encoding'], body: Buffer.concat(chunks) }));
+      });
+      req.on('error', reject);
+      req.end();
+    });
+    expect(packed.encoding).toBe('gzip');
+    expect(gunzipSync(packed.body).toString()).toBe(plain);
+  });
+});
+
 describe('decoded sessions are cached, their end is not', () => {
   const salt = 'authjs.session-token';
   async function userId(email: string) {

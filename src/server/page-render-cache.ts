@@ -1,0 +1,70 @@
+import { gzipSync } from 'node:zlib';
+import { acceptsGzip } from '~/cli/anonymous-page-cache.mjs';
+
+/**
+ * Whole rendered pages, kept by a key that spells out everything the page's HTML was made from.
+ *
+ * A page opts in by computing its key from what it read on this request (the person, their role,
+ * the rows it shows, the version of any cached body) and calling `cachedPageResponse(key)`; on a
+ * miss it sets `locals.renderKey` and renders as usual, and the middleware keeps the result. As
+ * every input is read again on every request and is part of the key, a save, a restore, a role
+ * change or a renamed person makes a different key: a stale page cannot be found, only a fresh
+ * one rendered. Entries are an optimisation, per process, and bounded by size (oldest use first).
+ *
+ * What this saves is Astro rendering the layout and the page, and gzip packing it: on a page read
+ * that was about half of the request's CPU.
+ */
+const MAX_CACHED_BYTES = 8 * 1024 * 1024;
+
+interface CachedPage {
+  /** The response's own headers as the app produced them (content type, page policy). */
+  headers: [string, string][];
+  plain: Uint8Array<ArrayBuffer>;
+  gzip: Uint8Array<ArrayBuffer>;
+}
+
+const pages = new Map<string, CachedPage>();
+let cachedBytes = 0;
+
+const sizeOf = (key: string, page: CachedPage) => key.length + page.plain.byteLength + page.gzip.byteLength;
+
+/** A key from the page's inputs, in order; any JSON-able values. */
+export function renderKeyOf(...inputs: unknown[]): string {
+  return JSON.stringify(inputs);
+}
+
+/** The kept page for `key` as a fresh Response for this request, or null. */
+export function cachedPageResponse(key: string, request: Request): Response | null {
+  const page = pages.get(key);
+  if (!page) return null;
+  pages.delete(key);
+  pages.set(key, page);
+  const headers = new Headers(page.headers);
+  headers.set('vary', 'Accept-Encoding');
+  const packed = acceptsGzip(request.headers.get('accept-encoding') ?? undefined);
+  if (packed) headers.set('content-encoding', 'gzip');
+  const body = packed ? page.gzip : page.plain;
+  headers.set('content-length', String(body.byteLength));
+  return new Response(body, { status: 200, headers });
+}
+
+/** Keeps a rendered 200 HTML response under `key`; hands back an equal response to send. */
+export async function keepRenderedPage(key: string, response: Response): Promise<Response> {
+  if (response.status !== 200 || !/^text\/html\b/i.test(response.headers.get('content-type') ?? '') || response.headers.has('set-cookie')) return response;
+  const plain = new Uint8Array(await response.arrayBuffer());
+  const headers = [...response.headers.entries()].filter(([name]) => name !== 'content-length' && name !== 'content-encoding');
+  const page: CachedPage = { headers, plain, gzip: new Uint8Array(gzipSync(plain)) };
+  if (sizeOf(key, page) <= MAX_CACHED_BYTES / 16) {
+    const old = pages.get(key);
+    if (old) cachedBytes -= sizeOf(key, old);
+    pages.delete(key);
+    pages.set(key, page);
+    cachedBytes += sizeOf(key, page);
+    for (const [oldKey, oldPage] of pages) {
+      if (cachedBytes <= MAX_CACHED_BYTES) break;
+      pages.delete(oldKey);
+      cachedBytes -= sizeOf(oldKey, oldPage);
+    }
+  }
+  return new Response(plain, { status: response.status, statusText: response.statusText, headers: response.headers });
+}
