@@ -7,6 +7,7 @@
 const DATE_TIME = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 const DAY_UTC = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeZone: 'UTC' });
+const DATE_TIME_UTC = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
 
 /** A Date, an ISO 8601 string (as JSON carries dates) or milliseconds since 1970. */
 export type Moment = Date | string | number;
@@ -26,4 +27,9 @@ export function formatDate(when: Moment): string {
 /** "3 Dec 2026" as the day in UTC: for stamps the server stores as a day (checked on site). */
 export function formatDayUtc(when: Moment): string {
   return DAY_UTC.format(toDate(when));
+}
+
+/** "3 Dec 2026, 07:05" in UTC, for server-rendered lists that say "UTC" after it. */
+export function formatDateTimeUtc(when: Moment): string {
+  return DATE_TIME_UTC.format(toDate(when));
 }

@@ -63,12 +63,22 @@ export type ChangesSince = Awaited<ReturnType<typeof changesSince>>;
 /** The venue home's "Recent changes": the latest saves across its pages. */
 export async function recentChanges(venueId: string, limit = 8) {
   const db = await getDb();
-  return db
-    .select({ slug: pages.slug, title: pages.title, number: revisions.number, summary: revisions.summary, createdAt: revisions.createdAt, author: users.name })
-    .from(revisions)
-    .innerJoin(pages, eq(pages.id, revisions.pageId))
-    .leftJoin(users, eq(users.id, revisions.authorId))
+  // A page's updated_at is the time of its newest revision (it changes only when one is made), so
+  // the `limit` newest revisions of a venue all belong to its `limit` most recently updated
+  // pages: look only there, off the (venue, updated_at) index, instead of sorting every revision
+  // of the venue (22 ms at 10,000 pages).
+  const recent = db
+    .select({ id: pages.id, slug: pages.slug, title: pages.title })
+    .from(pages)
     .where(and(eq(pages.venueId, venueId), isNull(pages.archivedAt)))
+    .orderBy(desc(pages.updatedAt))
+    .limit(limit)
+    .as('recent');
+  return db
+    .select({ slug: recent.slug, title: recent.title, number: revisions.number, summary: revisions.summary, createdAt: revisions.createdAt, author: users.name })
+    .from(recent)
+    .innerJoin(revisions, eq(revisions.pageId, recent.id))
+    .leftJoin(users, eq(users.id, revisions.authorId))
     .orderBy(desc(revisions.createdAt))
     .limit(limit);
 }

@@ -3,6 +3,8 @@ import { addBigVenue } from '../bench/big-venue';
 import { DEMO } from '../helpers/paths';
 import { startServer, type TestServer } from '../helpers/server';
 import { signIn, type Client } from '../helpers/session';
+import { createClient } from '@libsql/client';
+import { createTestPage, doc, para } from './pages-fixtures';
 
 /** A venue of 1,700 pages in 8 sections (212 or 213 each): the home stays small, every page is reachable. */
 let server: TestServer;
@@ -64,6 +66,43 @@ describe('a venue of many pages', () => {
   it('a person who is not a member gets the 404, section or not', async () => {
     expect((await viewer.fetch(`/venues/${big}`)).status).toBe(404);
     expect((await viewer.fetch(`/venues/${big}?section=part-0`)).status).toBe(404);
+  });
+
+  it('"Recent changes" are the newest revisions of live pages, as a plain sort of every revision finds them', async () => {
+    const a = await createTestPage(manager, big, 'Recent A', doc(para('one')), 'part-0');
+    for (const [n, text] of [[1, 'two'], [2, 'three']] as const) {
+      expect((await manager.sendJson('PUT', `/api/venues/${big}/pages/${a.page.slug}`, { doc: doc(para(text)), baseRevision: n })).status).toBe(200);
+    }
+    const b = await createTestPage(manager, big, 'Recent B', doc(para('only')), 'part-1');
+    const db = createClient({ url: `file:${server.dbPath}` });
+    // The reference: every revision of the venue's live pages, newest first (ties by page, number).
+    const expected = async () =>
+      (
+        await db.execute({
+          sql: `select p.slug, r.number from revisions r join pages p on p.id = r.page_id join venues v on v.id = p.venue_id
+                where v.slug = ? and p.archived_at is null order by r.created_at desc limit 8`,
+          args: [big],
+        })
+      ).rows.map((r) => `${r.slug}#${r.number}`);
+    const shown = async () => {
+      const box = (await html(manager, `/venues/${big}`)).match(/<section[^>]*data-testid="recent-changes"[\s\S]*?<\/section>/)![0];
+      return [...box.matchAll(new RegExp(`href="/venues/${big}/([\\w-]+)">[^<]*</a> · revision (\\d+)`, 'g'))].map((m) => `${m[1]}#${m[2]}`);
+    };
+    try {
+      const first = await shown();
+      expect(first.slice(0, 4)).toEqual([`${b.page.slug}#1`, `${a.page.slug}#3`, `${a.page.slug}#2`, `${a.page.slug}#1`]);
+      expect(new Set(first.slice(0, 4))).toEqual(new Set((await expected()).slice(0, 4)));
+      expect(first).toHaveLength(8);
+      // An archived page leaves the list and the counts.
+      await db.execute({ sql: 'update pages set archived_at = ? where slug = ?', args: [Date.now(), a.page.slug] });
+      const after = await shown();
+      expect(after.some((x) => x.startsWith(`${a.page.slug}#`))).toBe(false);
+      expect(after[0]).toBe(`${b.page.slug}#1`);
+      expect(await html(manager, `/venues/${big}`)).toContain('1701 pages');
+    } finally {
+      await db.execute({ sql: 'update pages set archived_at = null where slug = ?', args: [a.page.slug] });
+      db.close();
+    }
   });
 
   it('the demo venue, with few pages, still lists every page on its home', async () => {

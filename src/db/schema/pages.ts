@@ -30,7 +30,13 @@ export const pages = sqliteTable(
       .notNull()
       .$defaultFn(() => new Date()),
   },
-  (t) => [uniqueIndex('pages_venue_slug_idx').on(t.venueId, t.slug), index('pages_section_idx').on(t.sectionId)],
+  (t) => [
+    uniqueIndex('pages_venue_slug_idx').on(t.venueId, t.slug),
+    index('pages_section_idx').on(t.sectionId),
+    // The venue home: each section's first pages by title, and the pages changed most recently.
+    index('pages_venue_section_title_idx').on(t.venueId, t.sectionId, t.title, t.slug),
+    index('pages_venue_updated_idx').on(t.venueId, t.updatedAt),
+  ],
 );
 
 export const revisions = sqliteTable(
