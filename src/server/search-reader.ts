@@ -15,9 +15,20 @@ import { getDb } from './db';
 
 const dialect = new SQLiteAsyncDialect();
 
+/** The search thread's nice value (19 is the lowest priority; 0 is everyone else's). */
+export const SEARCH_NICENESS = 19;
+
 // CommonJS run by the worker: its own client, and nothing it runs may write.
 const WORKER_SOURCE = `
 const { parentPort, workerData } = require('node:worker_threads');
+// Searching is the one job here that can take a whole core; give this thread the lowest claim
+// on it, so the event loop (every other request) runs first whenever both want the CPU. On
+// Linux /proc/thread-self names this thread, and setpriority() on a thread id affects only it;
+// elsewhere it stays at normal priority.
+try {
+  const tid = Number(require('node:fs').readlinkSync('/proc/thread-self').split('/').pop());
+  if (tid > 0) require('node:os').setPriority(tid, workerData.niceness);
+} catch {}
 const { createClient } = require(workerData.clientPath);
 const client = createClient({ url: workerData.url, timeout: 5000 });
 const ready = client.execute('PRAGMA query_only = ON');
@@ -50,7 +61,7 @@ function failAll(e: Error) {
 
 function startWorker(url: string): Worker {
   const clientPath = createRequire(import.meta.url).resolve('@libsql/client');
-  const w = new Worker(WORKER_SOURCE, { eval: true, workerData: { url, clientPath } });
+  const w = new Worker(WORKER_SOURCE, { eval: true, workerData: { url, clientPath, niceness: SEARCH_NICENESS } });
   w.on('message', (m: { id: number; rows?: unknown[]; error?: string }) => {
     const p = pending.get(m.id);
     if (!p) return;

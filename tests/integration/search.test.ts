@@ -202,3 +202,21 @@ describe('GET /search, the results page', () => {
     expect(html).not.toContain('astro-island');
   });
 });
+
+describe('the search thread', () => {
+  // Linux only: /proc names each thread and its nice value (field 19 of its stat line).
+  const linux = process.platform === 'linux';
+  it.runIf(linux)('runs at the lowest CPU priority, so searching never outruns the other requests', async () => {
+    expect((await search(as.engineer, 'quokkaphone')).status).toBe(200);
+    const { readdirSync, readFileSync } = await import('node:fs');
+    const { execFileSync } = await import('node:child_process');
+    const { SEARCH_NICENESS } = await import('~/server/search-reader');
+    const workers = execFileSync('ps', ['-o', 'pid=', '--ppid', String(server.pid)], { encoding: 'utf8' }).split('\n').map((s) => s.trim()).filter(Boolean);
+    const niceness = workers.flatMap((pid) =>
+      readdirSync(`/proc/${pid}/task`).map((tid) => Number(readFileSync(`/proc/${pid}/task/${tid}/stat`, 'utf8').split(') ')[1].split(' ')[16])),
+    );
+    // Exactly one thread (the search worker) lowered; the event loop and the rest untouched.
+    expect(niceness.filter((n) => n === SEARCH_NICENESS)).toHaveLength(1);
+    expect(niceness.filter((n) => n === 0).length).toBeGreaterThan(3);
+  });
+});

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { snippetParts } from '~/lib/doc/marked-snippet';
 import { toSearchQuery } from '~/lib/doc/search-query';
-import { markAll, markedSnippet } from './mark-matches';
+import { markAll, markedSnippet, markedSnippetOfWhole, type MatchQuery } from './mark-matches';
 
 const hits = (marked: string) => snippetParts(marked).filter((p) => p.match).map((p) => p.text);
 const q = (typed: string) => toSearchQuery(typed)!;
@@ -58,5 +58,41 @@ describe('the shortest run that holds the hit', () => {
   it('marks dB(A) in "98 dB(A)" for dba, and all of it for 98dba', () => {
     expect(hits(markAll('limit 98 dB(A) here', q('dba')))).toEqual(['dB(A)']);
     expect(hits(markAll('limit 98 dB(A) here', q('98dba')))).toEqual(['98 dB(A)']);
+  });
+});
+
+describe('reading the head of a long text first', () => {
+  // A small seeded generator (mulberry32), so a failure can be replayed.
+  function random(seed: number) {
+    return () => {
+      seed = (seed + 0x6d2b79f5) | 0;
+      let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
+      t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+      return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+    };
+  }
+  const vocabulary = ['stage', 'backstage', 'Wi-Fi', 'wifi', '63', 'A', 'amps', 'dB(A)', 'dBA', '98', '2.5', 'mm', 'XR-18', 'rack', 'monitor', 'délai', 'Ohms', 'the', 'of', 'ω'];
+  const glue = [' ', ' ', ' ', '  ', '\n', ', ', '. ', '-', ' ('];
+  const queries: MatchQuery[] = [q('stage'), q('wifi'), q('63a'), q('dba'), q('db'), q('2.5mm'), q('xr18'), q('delai'), q('ohm'), { terms: ['mon'], prefixLast: true }, q('absentword')];
+
+  it('gives exactly the snippet the whole text gives, for texts long enough to cut', () => {
+    const next = random(20261203);
+    let cases = 0;
+    for (let n = 0; n < 100; n++) {
+      const length = 3200 + Math.floor(next() * 6000);
+      let text = '';
+      // Hits early in most texts, late in some, absent in a few.
+      const quietFor = next() < 0.7 ? Math.floor(next() * 400) : Math.floor(next() * length);
+      while (text.length < length) {
+        const quiet = text.length < quietFor;
+        const word = quiet ? `w${Math.floor(next() * 1000)}` : vocabulary[Math.floor(next() * vocabulary.length)];
+        text += word + glue[Math.floor(next() * glue.length)];
+      }
+      for (const query of queries) {
+        expect(markedSnippet(text, query), `text ${n}, ${query.terms.join(' ')}`).toBe(markedSnippetOfWhole(text, query));
+        cases++;
+      }
+    }
+    expect(cases).toBe(100 * queries.length);
   });
 });
