@@ -125,6 +125,8 @@ async function main() {
     const cases: [string, string, Record<string, string>][] = [
       ['/ signed out', '/', {}],
       ['calculator page /calc/bandwidth, signed out', '/calc/bandwidth', {}],
+      // Signed in, the header names the person, so the page is rendered for every request.
+      ['calculator page /calc/bandwidth, signed in', '/calc/bandwidth', { cookie }],
       ['calculator JSON route', '/api/calc/band?q=4.318', {}],
       ['venue index, signed in', `/venues/${venue}`, { cookie }],
       ['page read view, signed in (biggest demo page)', `/venues/${venue}/${biggest}`, { cookie }],

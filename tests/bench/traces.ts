@@ -1,3 +1,5 @@
+import { setFlagsFromString } from 'node:v8';
+import { runInNewContext } from 'node:vm';
 import { newEqBlock, newTraceRef } from '~/lib/doc/blocks/block-data';
 import { eqPlotSvg } from '~/lib/doc/render-blocks';
 import { parseTrace } from '~/lib/traces/parse-trace';
@@ -36,12 +38,14 @@ export function benchTraces(): void {
   });
   const parseMs = timeIt(() => parseTrace(text));
 
-  // Memory kept by one parsed trace: heap before and after holding ten of them (gc when exposed).
-  const gc = (globalThis as { gc?: () => void }).gc;
-  gc?.();
+  // Memory kept by one parsed trace: heap before and after holding ten of them, collected both
+  // times (without a full collection the difference is noise, and could even come out negative).
+  setFlagsFromString('--expose-gc');
+  const gc = runInNewContext('gc') as () => void;
+  gc();
   const heapBefore = process.memoryUsage().heapUsed;
   const kept = Array.from({ length: 10 }, () => parseTrace(text));
-  gc?.();
+  gc();
   const perTraceMb = (process.memoryUsage().heapUsed - heapBefore) / 10 / 1024 / 1024;
 
   const before = kept[0]!;
@@ -59,7 +63,7 @@ export function benchTraces(): void {
   console.log('\nMeasured traces (100,000 points, 4 columns, ' + (text.length / 1e6).toFixed(1) + ' MB of text)');
   console.log(`baseline: split lines and fields, Number() each   ${baselineMs.toFixed(1)} ms   ×1.00`);
   console.log(`parseTrace                                        ${parseMs.toFixed(1)} ms   ×${(parseMs / baselineMs).toFixed(2)} of baseline`);
-  console.log(`heap kept per parsed trace                        ${perTraceMb.toFixed(2)} MB${gc ? '' : ' (no --expose-gc: approximate)'}`);
+  console.log(`heap kept per parsed trace                        ${perTraceMb.toFixed(2)} MB`);
   console.log(`EQ plot SVG: no traces ${(bare.length / 1024).toFixed(1)} KiB; two traces + difference ${(withTraces.length / 1024).toFixed(1)} KiB`);
   console.log(`drawing it: ${drawMs.toFixed(1)} ms   ×${(drawMs / bareMs).toFixed(2)} of the same plot without traces`);
 }
