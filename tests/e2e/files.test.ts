@@ -166,6 +166,34 @@ describe('photos from the files screen into a page', () => {
     expect(new URL(page.url()).searchParams.get('next')).toBe(`/files/${photo.id}`);
   });
 
+  it('a venue of many photos shows them 60 at a time, the rest one tap away', async () => {
+    // 128 more rows sharing one stored photo: what matters here is the grid, not the bytes.
+    const { createClient } = await import('@libsql/client');
+    const db = createClient({ url: `file:${server.dbPath}` });
+    const [source] = (await db.execute({ sql: 'select * from files where id = ?', args: [uploaded[0].id] })).rows;
+    const columns = Object.keys(source).filter((c) => c !== 'id');
+    for (let i = 0; i < 128; i++) {
+      await db.execute({
+        sql: `insert into files (id, ${columns.join(', ')}) values (?, ${columns.map(() => '?').join(', ')})`,
+        args: [crypto.randomUUID(), ...columns.map((c) => (c === 'caption' ? `Spare photo ${i}` : (source[c] as string | number | null)))],
+      });
+    }
+    db.close();
+    const page = await viewer.context.newPage();
+    await page.goto(`${server.url}/venues/${venue}/files`);
+    const cards = page.getByTestId('file-caption');
+    await expect(cards.count()).resolves.toBe(60);
+    await expect(page.getByText('60 of 130 shown').count()).resolves.toBe(1);
+    await page.getByTestId('files-more').click();
+    await page.getByText('120 of 130 shown').waitFor();
+    await expect(cards.count()).resolves.toBe(120);
+    await expect(page.getByTestId('files-more').innerText()).resolves.toBe('Show 10 more');
+    await page.getByTestId('files-more').click();
+    await page.getByTestId('files-more').waitFor({ state: 'detached' });
+    await expect(cards.count()).resolves.toBe(130);
+    await page.close();
+  });
+
   it('nothing left 127.0.0.1', () => {
     for (const b of [engineer, viewer, anonymousBrowser]) expect(foreignRequests(b.requests)).toEqual([]);
   });
