@@ -5,7 +5,7 @@ import { resolvePass, type ResolvedPass } from './server/guest-passes';
 import { readSessionUser } from './server/session';
 import { completePagePolicy, securityHeaders } from './server/security-headers';
 import { foreignOriginRefusal } from './server/origin-check';
-import { keepRenderedPage } from './server/page-render-cache';
+import { cachedPageResponse, calculatorPageKey, keepRenderedPage } from './server/page-render-cache';
 
 /** Paths that never depend on who is asking; reading the session there is wasted work. */
 function isAnonymousPath(pathname: string): boolean {
@@ -95,8 +95,13 @@ export const onRequest = defineMiddleware(async (context, next) => {
       context.locals.principal = live ?? NO_VENUE_GUEST;
     }
   }
-  let response = await next();
-  if (context.locals.renderKey) response = await keepRenderedPage(context.locals.renderKey, response);
+  // A signed-in person's calculator page is kept whole like the read view (it differs from the
+  // anonymous one only in the header): answered from memory when kept, else kept after rendering.
+  const calcKey = context.locals.guest ? null : calculatorPageKey(context.url, context.request.method, context.locals.user);
+  const kept = calcKey ? cachedPageResponse(calcKey, context.request) : null;
+  if (calcKey && !kept) context.locals.renderKey = calcKey;
+  let response = kept ?? (await next());
+  if (!kept && context.locals.renderKey) response = await keepRenderedPage(context.locals.renderKey, response);
   const onGuestPath = GUEST_PATH.test(pathname);
   const extra: Record<string, string> = onGuestPath ? { 'referrer-policy': 'no-referrer', 'x-robots-tag': 'noindex, nofollow' } : {};
   const force: Record<string, string> = {};

@@ -33,6 +33,16 @@ export function renderKeyOf(...inputs: unknown[]): string {
   return JSON.stringify(inputs);
 }
 
+/**
+ * The key of a calculator page or guide for a signed-in person, or null for any other address.
+ * Those pages are made from the build, the address and the header's person only (signed out,
+ * they are the same for everyone and kept in the HTTP layer instead).
+ */
+export function calculatorPageKey(url: URL, method: string, user: { id: string; name: string; email: string; isAdmin: boolean } | null): string | null {
+  if (method !== 'GET' || !user || !/^\/calc(\/|$)/.test(url.pathname) || url.pathname.endsWith('.json')) return null;
+  return renderKeyOf('calc', url.pathname + url.search, [user.id, user.name, user.email, user.isAdmin]);
+}
+
 /** The kept page for `key` as a fresh Response for this request, or null. */
 export function cachedPageResponse(key: string, request: Request): Response | null {
   const page = pages.get(key);

@@ -164,6 +164,26 @@ describe('the whole kept page never outlives what it shows', () => {
     expect(await read(manager, page.slug)).toContain('Take off the advance sheet');
   });
 
+  it('a calculator page names whoever is signed in, a renamed person included, and nobody when signed out', async () => {
+    const calc = async (who: Client) => {
+      const res = await who.fetch('/calc/spl');
+      expect(res.status).toBe(200);
+      return res.text();
+    };
+    const viewerName = await nameOf(DEMO.viewer);
+    await calc(viewer);
+    expect(await calc(viewer)).toContain(`data-account-name="${viewerName}"`);
+    expect(await calc(engineer)).toContain(`data-account-name="${await nameOf(DEMO.engineer)}"`);
+    const signedOut = await (await fetch(`${server.url}/calc/spl`)).text();
+    expect(signedOut).not.toContain('data-account-name=');
+    try {
+      await sql('update users set name = ? where email = ?', ['Calc Reader Renamed', DEMO.viewer]);
+      expect(await calc(viewer)).toContain('data-account-name="Calc Reader Renamed"');
+    } finally {
+      await sql('update users set name = ? where email = ?', [viewerName, DEMO.viewer]);
+    }
+  });
+
   it('sends the kept page gzipped to a browser that takes gzip, equal to the plain one', async () => {
     const { page } = await createTestPage(engineer, venue, 'Cache packed', doc(para('Packed once.')));
     const plain = await warm(viewer, page.slug);
