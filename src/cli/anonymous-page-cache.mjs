@@ -10,6 +10,7 @@
 // sees a page rendered for someone else, and nothing unmarked is ever kept. The build cannot
 // change under a running process, so entries never go stale; they are bounded in count and size.
 import { gzipSync } from 'node:zlib';
+import { LRUCache } from 'lru-cache';
 
 export const ANONYMOUS_MARK = 'x-throwline-offline';
 
@@ -41,7 +42,7 @@ export function acceptsGzip(header) {
  */
 export function anonymousPageCache({ maxEntries = 64, maxEntryBytes = 512 * 1024 } = {}) {
   /** url → { status, headers: [name, value][], plain: Buffer, gzip: Buffer } */
-  const entries = new Map();
+  const entries = new LRUCache({ max: maxEntries });
 
   function answer(req, res, entry) {
     for (const [name, value] of entry.headers) res.setHeader(name, value);
@@ -60,19 +61,13 @@ export function anonymousPageCache({ maxEntries = 64, maxEntryBytes = 512 * 1024
     if (plain.length > maxEntryBytes) return;
     const headers = Object.entries(res.getHeaders()).filter(([name]) => !PER_TRANSFER.has(name));
     entries.set(url, { status: 200, headers, plain, gzip: gzipSync(plain) });
-    while (entries.size > maxEntries) entries.delete(entries.keys().next().value);
   }
 
   return (req, res, next) => {
     if (req.method !== 'GET' || carriesCredentials(req.headers)) return next();
     const url = req.url ?? '/';
     const hit = entries.get(url);
-    if (hit) {
-      // Re-inserting keeps the most used addresses at the young end of the Map's order.
-      entries.delete(url);
-      entries.set(url, hit);
-      return answer(req, res, hit);
-    }
+    if (hit) return answer(req, res, hit);
     const chunks = [];
     let size = 0;
     const write = res.write;

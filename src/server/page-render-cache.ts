@@ -1,4 +1,5 @@
 import { gzipSync } from 'node:zlib';
+import { LRUCache } from 'lru-cache';
 import { acceptsGzip } from '~/cli/anonymous-page-cache.mjs';
 
 /**
@@ -23,10 +24,9 @@ interface CachedPage {
   gzip: Uint8Array<ArrayBuffer>;
 }
 
-const pages = new Map<string, CachedPage>();
-let cachedBytes = 0;
-
 const sizeOf = (key: string, page: CachedPage) => key.length + page.plain.byteLength + page.gzip.byteLength;
+
+const pages = new LRUCache<string, CachedPage>({ maxSize: MAX_CACHED_BYTES, maxEntrySize: MAX_CACHED_BYTES / 16, sizeCalculation: (page, key) => sizeOf(key, page) });
 
 /** A key from the page's inputs, in order; any JSON-able values. */
 export function renderKeyOf(...inputs: unknown[]): string {
@@ -47,8 +47,6 @@ export function calculatorPageKey(url: URL, method: string, user: { id: string; 
 export function cachedPageResponse(key: string, request: Request): Response | null {
   const page = pages.get(key);
   if (!page) return null;
-  pages.delete(key);
-  pages.set(key, page);
   const headers = new Headers(page.headers);
   headers.set('vary', 'Accept-Encoding');
   const packed = acceptsGzip(request.headers.get('accept-encoding') ?? undefined);
@@ -63,18 +61,7 @@ export async function keepRenderedPage(key: string, response: Response): Promise
   if (response.status !== 200 || !/^text\/html\b/i.test(response.headers.get('content-type') ?? '') || response.headers.has('set-cookie')) return response;
   const plain = new Uint8Array(await response.arrayBuffer());
   const headers = [...response.headers.entries()].filter(([name]) => name !== 'content-length' && name !== 'content-encoding');
-  const page: CachedPage = { headers, plain, gzip: new Uint8Array(gzipSync(plain)) };
-  if (sizeOf(key, page) <= MAX_CACHED_BYTES / 16) {
-    const old = pages.get(key);
-    if (old) cachedBytes -= sizeOf(key, old);
-    pages.delete(key);
-    pages.set(key, page);
-    cachedBytes += sizeOf(key, page);
-    for (const [oldKey, oldPage] of pages) {
-      if (cachedBytes <= MAX_CACHED_BYTES) break;
-      pages.delete(oldKey);
-      cachedBytes -= sizeOf(oldKey, oldPage);
-    }
-  }
+  // One too big for the bound is simply not kept.
+  pages.set(key, { headers, plain, gzip: new Uint8Array(gzipSync(plain)) });
   return new Response(plain, { status: response.status, statusText: response.statusText, headers: response.headers });
 }

@@ -1,3 +1,4 @@
+import { LRUCache } from 'lru-cache';
 import type { PmNode } from '~/lib/doc/types';
 import { fileIdsInDoc, traceIdsIn } from '~/lib/doc/file-refs';
 import { renderDocHtml } from '~/lib/doc/render-html';
@@ -36,8 +37,6 @@ export interface RenderedRevision {
   version: string;
 }
 
-const cache = new Map<string, Entry>();
-let cachedChars = 0;
 
 /**
  * `loadDoc` reads the revision's stored JSON text; it is called only on a miss, so a cached read
@@ -52,9 +51,6 @@ export async function revisionHtml(venue: { id: string; slug: string }, pageSlug
   const available = referenced.size ? await availableFiles(venueId, referenced) : new Map<string, FileSize>();
   const availableKey = [...available.keys()].sort().join(',');
   if (hit && hit.availableKey === availableKey) {
-    // Re-inserting moves it to the young end of the Map's order.
-    cache.delete(key);
-    cache.set(key, hit);
     return { html: hit.html, outline: hit.outline, version: `${key}#${availableKey}` };
   }
   parsed ??= JSON.parse(await loadDoc()) as PmNode;
@@ -68,24 +64,11 @@ export async function revisionHtml(venue: { id: string; slug: string }, pageSlug
     imageSize: (src) => available.get(fileIdOfUrl(src) ?? ''),
     blockContext: { traces, curveHref: curveHrefFor(venue.slug, pageSlug) },
   });
-  remember(key, { referenced, availableKey, html, outline });
+  // An entry over an eighth of the bound is simply not kept.
+  cache.set(key, { referenced, availableKey, html, outline });
   return { html, outline, version: `${key}#${availableKey}` };
 }
 
 const sizeOf = (id: string, e: Entry) => e.html.length + id.length + e.availableKey.length + e.outline.reduce((n, h) => n + h.text.length + h.id.length, 0);
 
-function remember(id: string, entry: Entry): void {
-  const old = cache.get(id);
-  if (old) {
-    cache.delete(id);
-    cachedChars -= sizeOf(id, old);
-  }
-  if (entry.html.length > MAX_CACHED_CHARS / 8) return;
-  cache.set(id, entry);
-  cachedChars += sizeOf(id, entry);
-  for (const [oldId, oldEntry] of cache) {
-    if (cachedChars <= MAX_CACHED_CHARS) break;
-    cache.delete(oldId);
-    cachedChars -= sizeOf(oldId, oldEntry);
-  }
-}
+const cache = new LRUCache<string, Entry>({ maxSize: MAX_CACHED_CHARS, maxEntrySize: MAX_CACHED_CHARS / 8, sizeCalculation: (entry, key) => sizeOf(key, entry) });
