@@ -7,7 +7,7 @@ import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
 import { getDb, writeTx, type Reader, type Tx } from './db';
 import type { Db } from '~/db/client';
-import type { Action } from '~/lib/permissions';
+import { can, type Action, type VenueAccess } from '~/lib/permissions';
 import { loadVenue, requirePermission, requireUser, type RequestPrincipal } from './guard';
 import { HttpError } from './http';
 import { checkDocOrThrow } from './page-doc';
@@ -19,7 +19,7 @@ import type { SessionUser } from './session';
 const PAGE_NOT_FOUND = 'There is no such page in this venue.';
 
 /** Page slugs that would be shadowed by a fixed route under /venues/:venue/. */
-export const RESERVED_PAGE_SLUGS = new Set(['new', 'sections', 'files', 'advance', 'members', 'audit', 'settings', 'history', 'edit', 'search', 'changes', 'print']);
+export const RESERVED_PAGE_SLUGS = new Set(['new', 'sections', 'files', 'advance', 'members', 'audit', 'settings', 'history', 'edit', 'search', 'changes', 'print', 'archived']);
 
 /** A page of a venue with its current revision, document parsed; 404 when the slug is not a page of this venue. */
 export async function loadPageWithCurrent(venueId: string, pageSlug: string | undefined) {
@@ -188,11 +188,17 @@ export async function createPage(venueId: string, input: PageCreate, actor: Sess
   });
 }
 
+/** An archived page is out of the book: for anyone who may not restore it, it does not exist. */
+export function hideArchived(page: { archivedAt: Date | null }, user: SessionUser, access: VenueAccess): void {
+  if (page.archivedAt && !can(user, 'page.edit', access)) throw new HttpError(404, PAGE_NOT_FOUND);
+}
+
 /** 401 → 404 (venue, then page) → 403 for routes about one page. */
 export async function guardPage(user: RequestPrincipal, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
   const signedIn = requireUser(user);
   const ctx = await loadVenue(signedIn, venueSlug);
   const page = await findPage(ctx.venue.id, pageSlug);
+  hideArchived(page, signedIn, ctx.access);
   requirePermission(signedIn, action, ctx.access);
   return { ...ctx, user: signedIn, page };
 }

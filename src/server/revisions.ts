@@ -48,6 +48,9 @@ async function conflict(tx: Tx, page: PageRow, base: number): Promise<HttpError>
   );
 }
 
+/** An archived page keeps its history as it is; it takes no new revision until restored. */
+const ARCHIVED = 'This page is archived; restore it before changing it.';
+
 interface Append {
   page: PageRow;
   idempotencyKey?: string;
@@ -115,6 +118,7 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
   const summary = input.summary ?? '';
   return writeTx(async (tx) => {
     const current = await findPage(venueId, pageSlug, tx);
+    if (current.archivedAt) throw new HttpError(409, ARCHIVED);
     if (idempotencyKey) {
       const earlier = await replayed(tx, current, idempotencyKey, docText, actor);
       if (earlier) return earlier;
@@ -157,6 +161,7 @@ export async function saveRevision(venueId: string, pageSlug: string | undefined
 export async function restoreRevision(venueId: string, pageSlug: string | undefined, n: number, input: RestoreRequest, actor: SessionUser) {
   return writeTx(async (tx) => {
     const current = await findPage(venueId, pageSlug, tx);
+    if (current.archivedAt) throw new HttpError(409, ARCHIVED);
     if (input.baseRevision !== undefined && current.currentRevision !== input.baseRevision) throw await conflict(tx, current, input.baseRevision);
     const old = await revisionRow(tx, current.id, n);
     if (!old) throw new HttpError(404, `This page has no revision ${n}.`);

@@ -4,13 +4,14 @@ import { processorBlocksInOrder } from '~/lib/doc/blocks/block-order';
 import { contentDisposition } from '~/server/files/content-disposition';
 import { guardVenue } from '~/server/guard';
 import { handle, HttpError } from '~/server/http';
-import { loadPageWithCurrent } from '~/server/pages';
+import { hideArchived, loadPageWithCurrent } from '~/server/pages';
 
 /** The computed curve of the n-th processor block of a page's current revision, as text columns. */
 export const GET: APIRoute = (context) =>
   handle(async () => {
-    const { venue } = await guardVenue(context.locals.user, context.params.venue, 'venue.read');
+    const { venue, access, user } = await guardVenue(context.locals.user, context.params.venue, 'venue.read');
     const { page, revision } = await loadPageWithCurrent(venue.id, context.params.page);
+    hideArchived(page, user, access);
     const n = Number(context.params.n);
     const blocks = revision ? processorBlocksInOrder(revision.doc) : [];
     const node = Number.isInteger(n) && n >= 1 ? blocks[n - 1] : undefined;
