@@ -96,6 +96,7 @@ function signedInScreens(): [string, ((page: Page) => Promise<unknown>) | undefi
     [`/venues/${venue}/advance`, undefined],
     [`/venues/${venue}/advance/edit`, undefined],
     [`/venues/${venue}/changes`, undefined],
+    [`/venues/${venue}/archived`, undefined],
     ['/account', undefined],
   ];
 }
