@@ -10,6 +10,7 @@ const table: Record<Action, Record<'admin' | Role | 'none', boolean>> = {
   'file.upload': { admin: true, manager: true, engineer: true, viewer: false, none: false },
   'file.delete': { admin: true, manager: true, engineer: true, viewer: false, none: false },
   'members.manage': { admin: true, manager: true, engineer: false, viewer: false, none: false },
+  'venue.settings': { admin: true, manager: true, engineer: false, viewer: false, none: false },
   'audit.read': { admin: true, manager: true, engineer: false, viewer: false, none: false },
   'venue.create': { admin: true, manager: false, engineer: false, viewer: false, none: false },
   'admin.manage': { admin: true, manager: false, engineer: false, viewer: false, none: false },

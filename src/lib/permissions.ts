@@ -15,6 +15,7 @@ export type Action =
   | 'file.upload'
   | 'file.delete'
   | 'members.manage' // members, roles, guest passes, advance selection
+  | 'venue.settings' // the venue's name, town and check interval
   | 'audit.read'
   | 'venue.create' // instance-wide
   | 'admin.manage'; // make admins, read the outbox
@@ -67,7 +68,7 @@ export interface VenueAccess {
 }
 
 const ROLE_ACTIONS: Record<Role, ReadonlySet<Action>> = {
-  manager: new Set<Action>(['venue.read', 'advance.read', 'page.edit', 'page.check', 'file.upload', 'file.delete', 'members.manage', 'audit.read']),
+  manager: new Set<Action>(['venue.read', 'advance.read', 'page.edit', 'page.check', 'file.upload', 'file.delete', 'members.manage', 'venue.settings', 'audit.read']),
   engineer: new Set<Action>(['venue.read', 'advance.read', 'page.edit', 'page.check', 'file.upload', 'file.delete']),
   viewer: new Set<Action>(['venue.read', 'advance.read']),
 };
@@ -97,6 +98,7 @@ const ACTION_WORDS: Record<Action, string> = {
   'file.upload': 'upload files',
   'file.delete': 'delete files',
   'members.manage': 'manage members and guest passes',
+  'venue.settings': "change this venue's settings",
   'audit.read': 'read the audit log',
   'venue.create': 'create venues',
   'admin.manage': 'administer this instance',

@@ -1,6 +1,6 @@
 import type { AstroGlobal } from 'astro';
 import type { Action } from '~/lib/permissions';
-import { guardVenue, type VenueContext } from './guard';
+import { guardVenue, requirePermission, requireUser, type VenueContext } from './guard';
 import { noteVisit } from './members';
 import { HttpError } from './http';
 import type { SessionUser } from './session';
@@ -19,6 +19,20 @@ export async function guardVenuePage(Astro: AstroGlobal, action: Action): Promis
     if (ctx.access.role) await noteVisit(ctx.venue.id, ctx.user.id, ctx.visitStartedAt);
     Astro.locals.venueHere = { slug: ctx.venue.slug, access: ctx.access };
     return { ok: true, ctx };
+  } catch (err) {
+    return { ok: false, response: errorPageResponse(Astro, err) };
+  }
+}
+
+/**
+ * The HTML counterpart of requireUser + requirePermission for instance-wide screens (no venue):
+ * signed out → sign in and come back, refused → the 403 page.
+ */
+export function guardInstancePage(Astro: AstroGlobal, action: Action): { ok: true; user: SessionUser } | { ok: false; response: Response | Promise<Response> } {
+  try {
+    const user = requireUser(Astro.locals.principal);
+    requirePermission(user, action);
+    return { ok: true, user };
   } catch (err) {
     return { ok: false, response: errorPageResponse(Astro, err) };
   }

@@ -1,6 +1,6 @@
 import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import { memberships, pages, sections, venues } from '~/db/schema';
-import type { VenueCreate } from '~/lib/schemas/venue';
+import type { VenueCreate, VenueUpdate } from '~/lib/schemas/venue';
 import { DEFAULT_SECTIONS } from '~/lib/default-sections';
 import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
@@ -64,4 +64,24 @@ export async function listPages(venueId: string) {
     .innerJoin(sections, eq(sections.id, pages.sectionId))
     .where(and(eq(pages.venueId, venueId), isNull(pages.archivedAt)))
     .orderBy(asc(sections.position), asc(pages.title));
+}
+
+/**
+ * Changes a venue's name, town or check interval, audited with what it was. The slug stays, so
+ * every link and bookmark keeps working; a field left out is left as it is.
+ */
+export async function updateVenue(venueId: string, input: VenueUpdate, actor: SessionUser) {
+  return writeTx(async (tx) => {
+    const [before] = await tx.select().from(venues).where(eq(venues.id, venueId)).limit(1);
+    if (!before) throw new HttpError(404, 'There is no such venue, or you are not a member of it.');
+    const changes: Partial<typeof venues.$inferInsert> = {};
+    if (input.name !== undefined && input.name !== before.name) changes.name = input.name;
+    if (input.town !== undefined && (input.town || null) !== before.town) changes.town = input.town || null;
+    if (input.checkStaleMonths !== undefined && input.checkStaleMonths !== before.checkStaleMonths) changes.checkStaleMonths = input.checkStaleMonths;
+    if (Object.keys(changes).length === 0) return before;
+    const [after] = await tx.update(venues).set(changes).where(eq(venues.id, venueId)).returning();
+    const detail = Object.fromEntries(Object.keys(changes).map((k) => [k, { from: before[k as keyof typeof before], to: after[k as keyof typeof after] }]));
+    await recordAudit(tx, { venueId, actorId: actor.id, action: 'venue.update', targetType: 'venue', targetId: venueId, detail });
+    return after;
+  });
 }

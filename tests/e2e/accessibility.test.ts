@@ -97,6 +97,7 @@ function signedInScreens(): [string, ((page: Page) => Promise<unknown>) | undefi
     [`/venues/${venue}/advance/edit`, undefined],
     [`/venues/${venue}/changes`, undefined],
     [`/venues/${venue}/archived`, undefined],
+    [`/venues/${venue}/settings`, undefined],
     ['/account', undefined],
   ];
 }

@@ -86,6 +86,8 @@ const routes: { name: string; run: (who: Anyone) => Promise<Response>; expect: R
   // Archive and move (no-ops here: restore a live page, move a page to its own section).
   { name: 'PUT page archived', run: (w) => send(w, 'PUT', `/api/venues/${people.venue}/pages/power-distribution/archived`, { archived: false }), expect: expectation(['admin', 'manager', 'engineer'], 200) },
   { name: 'PUT page section', run: (w) => send(w, 'PUT', `/api/venues/${people.venue}/pages/power-distribution/section`, { section: 'power' }), expect: expectation(['admin', 'manager', 'engineer'], 200) },
+  { name: 'GET venue', run: (w) => send(w, 'GET', `/api/venues/${people.venue}`), expect: expectation(READERS, 200) },
+  { name: 'PATCH venue (same interval)', run: (w) => send(w, 'PATCH', `/api/venues/${people.venue}`, { checkStaleMonths: 6 }), expect: expectation(MANAGERS, 200) },
   // Routes that existed before: a guest's pass opens none of them.
   { name: 'GET pages (existing)', run: (w) => send(w, 'GET', `/api/venues/${people.venue}/pages`), expect: expectation(READERS, 200) },
   { name: 'GET search (existing)', run: (w) => send(w, 'GET', `/api/search?q=power`), expect: { ...expectation([...READERS, 'otherManager'], 200) } },
@@ -110,6 +112,7 @@ describe('role matrix: screens', () => {
     { path: () => `/venues/${people.venue}/advance`, allowed: ['admin', 'manager', 'engineer', 'viewer'] },
     { path: () => `/venues/${people.venue}/changes`, allowed: ['admin', 'manager', 'engineer', 'viewer'] },
     { path: () => `/venues/${people.venue}/archived`, allowed: ['admin', 'manager', 'engineer'] },
+    { path: () => `/venues/${people.venue}/settings`, allowed: ['admin', 'manager'] },
   ];
   for (const screen of screens) {
     it(`${screen.path.toString().match(/\/(\w+(?:\/edit)?)`/)?.[1] ?? 'screen'}`, async () => {

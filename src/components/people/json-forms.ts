@@ -9,7 +9,8 @@ function fieldsOf(form: HTMLFormElement): Record<string, unknown> {
   for (const el of Array.from(form.elements)) {
     if (!(el instanceof HTMLInputElement || el instanceof HTMLSelectElement || el instanceof HTMLTextAreaElement) || !el.name) continue;
     if (el instanceof HTMLInputElement && el.type === 'checkbox') out[el.name] = el.checked;
-    else if (el.value !== '') out[el.name] = el.value;
+    // An empty field is left out, unless it says an empty value means "clear it" (data-keep-empty).
+    else if (el.value !== '' || el.dataset.keepEmpty !== undefined) out[el.name] = el.value;
   }
   return out;
 }
