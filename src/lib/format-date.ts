@@ -8,6 +8,7 @@ const DATE_TIME = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeSt
 const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 const DAY_UTC = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeZone: 'UTC' });
 const DATE_TIME_UTC = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
+const DATE_TIME_SECONDS_UTC = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'medium', timeZone: 'UTC' });
 
 /** A Date, an ISO 8601 string (as JSON carries dates) or milliseconds since 1970. */
 export type Moment = Date | string | number;
@@ -32,4 +33,9 @@ export function formatDayUtc(when: Moment): string {
 /** "3 Dec 2026, 07:05" in UTC, for server-rendered lists that say "UTC" after it. */
 export function formatDateTimeUtc(when: Moment): string {
   return DATE_TIME_UTC.format(toDate(when));
+}
+
+/** "3 Dec 2026, 07:05:09" in UTC: the audit log, where the order within a minute matters. */
+export function formatDateTimeSecondsUtc(when: Moment): string {
+  return DATE_TIME_SECONDS_UTC.format(toDate(when));
 }
