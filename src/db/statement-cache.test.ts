@@ -40,6 +40,23 @@ describe('statement cache', () => {
     db.close();
   });
 
+  it('answers the columns of a statement that names them from memory, and asks again for "*"', () => {
+    const db = new Database(':memory:');
+    db.exec('create table racks (id integer primary key, name text)');
+    const named = db.prepare('select id, name from racks');
+    expect(named.columns()).toBe(named.columns());
+    expect(named.columns().map((c) => c.name)).toEqual(['id', 'name']);
+    // "*" is never kept: after a new column, a star select names it and returns it.
+    const star = db.prepare('select * from racks');
+    expect(db.prepare('select * from racks')).not.toBe(star);
+    db.exec('alter table racks add column phase text');
+    db.exec("insert into racks (name, phase) values ('Amp rack A', 'L1')");
+    expect(db.prepare('select * from racks').columns().map((c) => c.name)).toEqual(['id', 'name', 'phase']);
+    expect(db.prepare('select * from racks').all()).toEqual([{ id: 1, name: 'Amp rack A', phase: 'L1' }]);
+    expect(db.prepare('select count(*) as n from racks').all()).toEqual([{ n: 1 }]);
+    db.close();
+  });
+
   it('keeps at most 200 statements per connection, oldest use first out', () => {
     const db = new Database(':memory:');
     const first = db.prepare('select 0');

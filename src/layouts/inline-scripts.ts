@@ -14,3 +14,6 @@ export const inlineScripts: readonly string[] = [
 export function inlineScriptHash(code: string): `sha256-${string}` {
   return `sha256-${createHash('sha256').update(code, 'utf8').digest('base64')}`;
 }
+
+/** Their hashes, worked out once per process rather than on every render. */
+export const inlineScriptHashes: readonly `sha256-${string}`[] = inlineScripts.map(inlineScriptHash);

@@ -4,6 +4,7 @@ import type { VenueCreate, VenueUpdate } from '~/lib/schemas/venue';
 import { DEFAULT_SECTIONS } from '~/lib/default-sections';
 import { slugify } from '~/lib/slug';
 import { recordAudit } from './audit';
+import type { Db } from '~/db/client';
 import { getDb, writeTx } from './db';
 import { readableVenueCondition } from './guard';
 import { HttpError } from './http';
@@ -41,9 +42,16 @@ export async function createVenue(input: VenueCreate, actor: SessionUser) {
   });
 }
 
+/** Built once: the read view asks for the sections on every read by an engineer. */
+let sectionsQuery: ReturnType<typeof buildSectionsQuery> | undefined;
+
+function buildSectionsQuery(db: Db) {
+  return db.select().from(sections).where(eq(sections.venueId, sql.placeholder('venueId'))).orderBy(asc(sections.position), asc(sections.title)).prepare();
+}
+
 export async function listSections(venueId: string) {
-  const db = await getDb();
-  return db.select().from(sections).where(eq(sections.venueId, venueId)).orderBy(asc(sections.position), asc(sections.title));
+  sectionsQuery ??= buildSectionsQuery(await getDb());
+  return sectionsQuery.all({ venueId });
 }
 
 /** Pages of a venue with their section, for the venue home and GET /api/venues/:venue/pages. */
