@@ -96,6 +96,8 @@ export interface SearchHit<When = string> {
 export interface SearchAnswer<When = string> {
   q: string;
   hits: SearchHit<When>[];
+  /** The query matched more pages than are ranked (src/server/page-search.ts): these are the best of the newest. */
+  recentOnly: boolean;
 }
 
 export interface SectionRow {

@@ -67,7 +67,9 @@ describe('GET /api/search', () => {
     expect(engineer.hits.map((h) => h.page.title)).toEqual(['Zebrafinch spares']);
     expect(engineer.raw).not.toContain('Secret annex');
     expect(engineer.raw).not.toContain(otherVenue);
-    expect(Object.keys(JSON.parse(engineer.raw)).sort()).toEqual(['hits', 'q']);
+    // recentOnly counts readable matches only (tests/integration/venue-index.test.ts checks it).
+    expect(Object.keys(JSON.parse(engineer.raw)).sort()).toEqual(['hits', 'q', 'recentOnly']);
+    expect(JSON.parse(engineer.raw).recentOnly).toBe(false);
     const viewer = await search(as.viewer, 'zebrafinch cable');
     expect(viewer.hits).toEqual([]);
     const other = await search(as.otherManager, 'zebrafinch');

@@ -105,6 +105,41 @@ describe('a venue of many pages', () => {
     }
   });
 
+  it('a word on more than 1,000 pages is ranked among its newest 1,000, and says so; a rarer word is ranked whole', async () => {
+    const db = createClient({ url: `file:${server.dbPath}` });
+    try {
+      // The reference, straight from the index: the newest 1,000 matches this manager may read,
+      // then the best 20 of those by the same ranking.
+      const managerId = String((await db.execute({ sql: 'select id from users where email = ?', args: [DEMO.manager] })).rows[0].id);
+      const readable = 'p.venue_id in (select venue_id from memberships where user_id = ?) and p.archived_at is null';
+      const newest = (
+        await db.execute({
+          sql: `select f.rowid as id from pages_fts f join page_search_keys k on k.id = f.rowid join pages p on p.id = k.page_id
+                where f.pages_fts match 'stage' and ${readable} order by f.rowid desc limit 1000`,
+          args: [managerId],
+        })
+      ).rows.map((r) => Number(r.id));
+      expect(newest).toHaveLength(1000);
+      const best = (
+        await db.execute({
+          sql: `select p.slug from pages_fts join page_search_keys k on k.id = pages_fts.rowid join pages p on p.id = k.page_id
+                where pages_fts match 'stage' and pages_fts.rank match 'bm25(10.0, 1.0)' and pages_fts.rowid >= ? and ${readable}
+                order by pages_fts.rank limit 20`,
+          args: [Math.min(...newest), managerId],
+        })
+      ).rows.map((r) => String(r.slug));
+      const answer = (await (await manager.fetch('/api/search?q=stage')).json()) as { hits: { page: { slug: string } }[]; recentOnly: boolean };
+      expect(answer.recentOnly).toBe(true);
+      expect(answer.hits.map((h) => h.page.slug)).toEqual(best);
+      expect(await html(manager, '/search?q=stage')).toContain('data-testid="search-recent-only"');
+      const rare = (await (await manager.fetch('/api/search?q=quokkaphone')).json()) as { recentOnly: boolean };
+      expect(rare.recentOnly).toBe(false);
+      expect(await html(manager, '/search?q=quokkaphone')).not.toContain('data-testid="search-recent-only"');
+    } finally {
+      db.close();
+    }
+  });
+
   it('the demo venue, with few pages, still lists every page on its home', async () => {
     const venue = ((await (await viewer.fetch('/api/venues')).json()) as { venues: { slug: string }[] }).venues[0].slug;
     const { pages } = (await (await viewer.fetch(`/api/venues/${venue}/pages`)).json()) as { pages: { slug: string }[] };

@@ -10,6 +10,6 @@ export const GET: APIRoute = ({ locals, url }) =>
   handle(async () => {
     const user = requireUser(locals.principal);
     const { q, limit } = parseWith(SearchQuerySchema, searchParamsObject(url));
-    const hits = await searchPages(user, q, limit);
-    return json<SearchAnswer<Date>>({ q, hits });
+    const { hits, recentOnly } = await searchPages(user, q, limit);
+    return json<SearchAnswer<Date>>({ q, hits, recentOnly });
   });
