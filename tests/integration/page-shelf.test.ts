@@ -156,13 +156,57 @@ describe('moving a page to another section', () => {
     ['an empty name', '', 400],
     ['a number', 7, 400],
     ['an overlong name', 'x'.repeat(500), 400],
-  ])('%s: %i naming the field, and the page stays put', async (_name, section, status) => {
+    ['a section title in another script', 'ステージ', 400],
+    ['an accented name', 'bühne', 400],
+    ['a line break and a header after it', 'power\r\nX-Injected: 1', 400],
+    ['an encoded line break', 'power%0d%0aX-Injected:%201', 400],
+    ['a direction control', 'power\u202Eegats', 400],
+    ['a NUL', 'power\u0000', 400],
+    ['a path', '../power', 400],
+    ['upper case', 'POWER', 400],
+  ])('%s is refused naming the field, and the page stays put', async (_name, section, status) => {
     const res = await move(engineer, 'rigging-points', section);
     expect(res.status).toBe(status);
     const body = (await res.json()) as { error: string; field?: string };
     expect(body.error.length).toBeGreaterThan(5);
+    expect(body.field).toBe('section');
+    // The sentence never repeats what was sent when it is not a section name.
+    expect(body.error).not.toMatch(/[\r\n\u0000\u202E]|Injected|ステージ/);
+    expect(res.headers.get('x-injected')).toBeNull();
     const { page } = (await (await viewer.fetch(`/api/venues/${venue}/pages/rigging-points`)).json()) as { page: { section: { slug: string } } };
     expect(page.section.slug).toBe('rigging');
+  });
+
+  it('a page on the advance sheet stays on it, in its place, listed under its new section everywhere at once', async () => {
+    const { page } = await createTestPage(engineer, venue, 'Shelf sheet mover', doc(para('Stage box to the left.')), 'stage');
+    expect((await manager.sendJson('PUT', `/api/venues/${venue}/pages/${page.slug}/advance`, { included: true })).status).toBe(200);
+    type Sheet = { pages: { slug: string; section: { slug: string } }[] };
+    const sheet = async () => (await (await viewer.fetch(`/api/venues/${venue}/advance`)).json()) as Sheet;
+    const order = (await sheet()).pages.map((p) => p.slug);
+    expect(order).toContain(page.slug);
+    // The book, section by section, read twice (warm) before the move.
+    const sectionOf = (html: string, slug: string) => html.match(new RegExp(`<section aria-labelledby="sec-${slug}">[\\s\\S]*?</section>`))?.[0] ?? '';
+    const crumbsOf = (html: string) => html.match(/<nav aria-label="Breadcrumb"[\s\S]*?<\/nav>/)?.[0] ?? '';
+    const link = `/venues/${venue}/${page.slug}"`;
+    for (let i = 0; i < 2; i++) {
+      expect(sectionOf(await text(viewer, `/venues/${venue}?section=stage`), 'stage')).toContain(link);
+      expect(crumbsOf(await text(viewer, `/venues/${venue}/${page.slug}`))).toContain('Stage');
+      expect(await text(viewer, `/venues/${venue}/advance`)).toContain(page.title);
+    }
+
+    expect((await move(engineer, page.slug, 'power')).status).toBe(200);
+    const after = await sheet();
+    expect(after.pages.map((p) => p.slug)).toEqual(order);
+    expect(after.pages.find((p) => p.slug === page.slug)?.section.slug).toBe('power');
+    expect(sectionOf(await text(viewer, `/venues/${venue}?section=power`), 'power')).toContain(link);
+    expect(sectionOf(await text(viewer, `/venues/${venue}?section=stage`), 'stage')).not.toContain(link);
+    const read = await text(viewer, `/venues/${venue}/${page.slug}`);
+    const crumbs = crumbsOf(read);
+    expect(crumbs).toContain('Power');
+    expect(crumbs).not.toContain('Stage');
+    expect(read).toContain('Stage box to the left.');
+    const { page: listed } = (await (await viewer.fetch(`/api/venues/${venue}/pages/${page.slug}`)).json()) as { page: { inAdvance: boolean } };
+    expect(listed.inAdvance).toBe(true);
   });
 
   it('an archived page is restored before it is moved; viewers and other venues may not move pages', async () => {

@@ -164,6 +164,32 @@ describe('the whole kept page never outlives what it shows', () => {
     expect(await read(manager, page.slug)).toContain('Take off the advance sheet');
   });
 
+  it('archiving, restoring and moving a page, and a new section to move it to, show on the next read', async () => {
+    const { page } = await createTestPage(engineer, venue, 'Cache shelf', doc(para('On the shelf.')), 'stage');
+    const shelf = (body: unknown) => engineer.sendJson('PUT', `/api/venues/${venue}/pages/${page.slug}/${'archived' in (body as object) ? 'archived' : 'section'}`, body);
+    const crumbs = (html: string) => html.match(/<nav aria-label="Breadcrumb"[\s\S]*?<\/nav>/)?.[0] ?? '';
+    await warm(viewer, page.slug);
+    expect(await warm(engineer, page.slug)).not.toContain('data-testid="archived-note"');
+    expect((await shelf({ archived: true })).status).toBe(200);
+    expect((await viewer.fetch(`/venues/${venue}/${page.slug}`)).status).toBe(404);
+    const archived = await read(engineer, page.slug);
+    expect(archived).toContain('data-testid="archived-note"');
+    expect(archived).not.toContain('data-testid="move-section"');
+    expect((await shelf({ archived: false })).status).toBe(200);
+    expect(await read(engineer, page.slug)).not.toContain('data-testid="archived-note"');
+    expect(await read(viewer, page.slug)).toContain('On the shelf.');
+
+    expect(crumbs(await warm(viewer, page.slug))).toContain('Stage');
+    expect((await shelf({ section: 'power' })).status).toBe(200);
+    expect(crumbs(await read(viewer, page.slug))).toContain('Power');
+    expect(crumbs(await read(engineer, page.slug))).not.toContain('Stage');
+
+    const made = await engineer.sendJson('POST', `/api/venues/${venue}/sections`, { title: 'Cache loading dock' });
+    expect(made.status).toBe(201);
+    const { section } = (await made.json()) as { section: { slug: string } };
+    expect(await read(engineer, page.slug)).toContain(`<option value="${section.slug}"`);
+  });
+
   it('a calculator page names whoever is signed in, a renamed person included, and nobody when signed out', async () => {
     const calc = async (who: Client) => {
       const res = await who.fetch('/calc/spl');
