@@ -25,6 +25,19 @@ export async function guardVenuePage(Astro: AstroGlobal, action: Action): Promis
 }
 
 /**
+ * The HTML counterpart of requireUser for screens any signed-in person may open (venues, search,
+ * account): signed out → sign in and come back; a guest pass presented here opens nothing (404),
+ * as everywhere outside the advance sheet, even in a browser that is also signed in.
+ */
+export function guardSignedInPage(Astro: AstroGlobal): { ok: true; user: SessionUser } | { ok: false; response: Response | Promise<Response> } {
+  try {
+    return { ok: true, user: requireUser(Astro.locals.principal) };
+  } catch (err) {
+    return { ok: false, response: errorPageResponse(Astro, err) };
+  }
+}
+
+/**
  * The HTML counterpart of requireUser + requirePermission for instance-wide screens (no venue):
  * signed out → sign in and come back, refused → the 403 page.
  */

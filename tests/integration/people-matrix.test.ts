@@ -18,6 +18,7 @@ let server: TestServer;
 let people: People;
 const tokens = {} as Record<Guest, string>;
 let viewerId: string;
+let archivedSlug = 'archived-page-not-made-yet';
 
 async function makePass(venue: string, label: string): Promise<{ id: string; token: string }> {
   const res = await people.as.manager.sendJson('POST', `/api/venues/${venue}/passes`, { label });
@@ -38,6 +39,14 @@ beforeAll(async () => {
   expect((await people.as.manager.fetch(`/api/venues/${people.venue}/passes/${revoked.id}`, { method: 'DELETE' })).status).toBe(204);
   tokens.guestRevoked = revoked.token;
   tokens.guestOtherVenue = (await makePass(people.otherVenue, 'Other venue act')).token;
+  const made = await people.as.engineer.sendJson('POST', `/api/venues/${people.venue}/pages`, {
+    title: 'Matrix archived page',
+    section: 'stage',
+    doc: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Out of the book.' }] }] },
+  });
+  expect(made.status).toBe(201);
+  archivedSlug = ((await made.json()) as { page: { slug: string } }).page.slug;
+  expect((await people.as.engineer.sendJson('PUT', `/api/venues/${people.venue}/pages/${archivedSlug}/archived`, { archived: true })).status).toBe(200);
 });
 afterAll(async () => {
   people?.db.close();
@@ -124,6 +133,88 @@ describe('role matrix: screens', () => {
       }
     });
   }
+
+  /**
+   * Every screen once more, now also for each guest presenting their pass as
+   * `Authorization: Bearer` (a pass opens /advance/<token> and nothing else: 404 everywhere here,
+   * never "sign in"), and the screens every signed-in person, or anyone, may open.
+   */
+  type Rule = 'manager' | 'editor' | 'reader' | 'signed-in' | 'anyone';
+  const everyScreen: { path: () => string; rule: Rule }[] = [
+    { path: () => `/venues/${people.venue}/members`, rule: 'manager' },
+    { path: () => `/venues/${people.venue}/passes`, rule: 'manager' },
+    { path: () => `/venues/${people.venue}/audit`, rule: 'manager' },
+    { path: () => `/venues/${people.venue}/advance/edit`, rule: 'manager' },
+    { path: () => `/venues/${people.venue}/settings`, rule: 'manager' },
+    { path: () => `/venues/${people.venue}/archived`, rule: 'editor' },
+    { path: () => `/venues/${people.venue}/sections`, rule: 'editor' },
+    { path: () => `/venues/${people.venue}/power-distribution/edit`, rule: 'editor' },
+    // An archived page: those who may restore it read it with a note; to everyone else it is not there.
+    { path: () => `/venues/${people.venue}/${archivedSlug}`, rule: 'editor' },
+    { path: () => `/venues/${people.venue}/${archivedSlug}/history`, rule: 'editor' },
+    { path: () => `/venues/${people.venue}/advance`, rule: 'reader' },
+    { path: () => `/venues/${people.venue}/changes`, rule: 'reader' },
+    { path: () => `/venues/${people.venue}`, rule: 'reader' },
+    { path: () => `/venues/${people.venue}/power-distribution`, rule: 'reader' },
+    { path: () => '/search?q=power', rule: 'signed-in' },
+    { path: () => '/account', rule: 'signed-in' },
+    { path: () => '/venues', rule: 'signed-in' },
+    { path: () => '/signin/link', rule: 'anyone' },
+    { path: () => '/signin/forgot', rule: 'anyone' },
+  ];
+  const allowedBy: Record<Exclude<Rule, 'anyone' | 'signed-in'>, Who[]> = {
+    manager: ['admin', 'manager'],
+    editor: ['admin', 'manager', 'engineer'],
+    reader: ['admin', 'manager', 'engineer', 'viewer'],
+  };
+  function screenAnswer(rule: Rule, who: Anyone): number {
+    if (rule === 'anyone') return 200;
+    if ((GUESTS as string[]).includes(who)) return 404;
+    if (who === 'signedOut') return 303;
+    if (rule === 'signed-in') return 200;
+    if (allowedBy[rule].includes(who as Who)) return 200;
+    return who === 'otherManager' ? 404 : 403;
+  }
+  for (const screen of everyScreen) {
+    it(`every principal, guests with a pass included: ${screen.path.toString().replace(/^\(\) => /, '')}`, async () => {
+      const got = {} as Record<Anyone, number>;
+      const want = {} as Record<Anyone, number>;
+      for (const who of [...MEMBERS, ...GUESTS]) {
+        const res = await send(who, 'GET', screen.path());
+        got[who] = res.status;
+        want[who] = screenAnswer(screen.rule, who);
+        // An archived page is no refusal but absence: a viewer gets the 404 page, not the 403 one.
+        if (screen.path().includes(archivedSlug) && who === 'viewer') want[who] = 404;
+        if (res.status === 303) expect(res.headers.get('location'), `${who} ${screen.path()}`).toMatch(/^\/signin\?next=/);
+      }
+      expect(got).toEqual(want);
+    });
+  }
+
+  it('forged sign-in, reset and invitation links are a 404 for anyone, a pass presented included', async () => {
+    // Few principals: wrong tokens count against the address (20 per 15 minutes), and these pages
+    // answer the same whoever asks; each role is tried on at least one of them.
+    const forged = 'A'.repeat(43);
+    const asks: [Anyone, string][] = [
+      ['signedOut', `/signin/link/${forged}`],
+      ['viewer', `/signin/link/${forged}`],
+      ['guestValid', `/signin/link/${forged}`],
+      ['signedOut', `/signin/reset/${forged}`],
+      ['manager', `/signin/reset/${forged}`],
+      ['guestRevoked', `/signin/reset/${forged}`],
+      ['signedOut', `/invite/${forged}`],
+      ['engineer', `/invite/${forged}`],
+      ['guestExpired', `/invite/${forged}`],
+      ['admin', `/invite/${forged}x`],
+      ['otherManager', `/signin/link/${forged}x`],
+      ['guestOtherVenue', `/signin/reset/${forged}x`],
+    ];
+    for (const [who, path] of asks) {
+      const res = await send(who, 'GET', path);
+      expect(res.status, `${who} ${path}`).toBe(404);
+      expect(res.headers.get('set-cookie') ?? '', `${who} ${path}`).not.toMatch(/session-token=[^;]/);
+    }
+  });
 
   it('the guest link opens only for a live pass, and only its own venue; others are 404', async () => {
     for (const guest of GUESTS) {
