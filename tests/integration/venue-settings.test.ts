@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import { signInEveryone, type People } from './people-fixtures';
 import { snapshot } from './pages-fixtures';
+import { TOWN_MAX, VENUE_NAME_MAX } from '~/lib/text-limits';
 
 /**
  * A venue's settings: its name and town (the slug and every link stay), and how long power and
@@ -43,6 +44,20 @@ describe('PATCH /api/venues/:venue', () => {
     }
   });
 
+  it('takes names in any script, and shows markup in a name as text', async () => {
+    const { venue: before } = (await (await people.as.viewer.fetch(`/api/venues/${people.venue}`)).json()) as { venue: { name: string; town: string | null } };
+    try {
+      const res = await patch('manager', { name: 'Salle Écluse — 北ホール <b>', town: 'Zürich' });
+      expect(res.status).toBe(200);
+      expect(((await res.json()) as { venue: { name: string } }).venue.name).toBe('Salle Écluse — 北ホール <b>');
+      const home = await (await people.as.viewer.fetch(`/venues/${people.venue}`)).text();
+      expect(home).toContain('Salle Écluse — 北ホール &lt;b&gt;');
+      expect(home).not.toContain('北ホール <b>');
+    } finally {
+      expect((await patch('admin', { name: before.name, town: before.town ?? '' })).status).toBe(200);
+    }
+  });
+
   it('the warning on the advance sheet follows the venue setting', async () => {
     // Power distribution checked on site four months ago.
     const checked = new Date();
@@ -67,6 +82,11 @@ describe('PATCH /api/venues/:venue', () => {
     ['a one-letter name', { name: 'H' }],
     ['a name with a bidi override', { name: 'Hall\u202Eevil' }],
     ['a line break in the town', { town: 'Line\r\nBcc: x@y' }],
+    ['a line break and a header in the name', { name: 'Hall\r\nX-Injected: 1' }],
+    ['a NUL in the name', { name: 'Hall\u0000' }],
+    ['an overlong name', { name: 'H'.repeat(VENUE_NAME_MAX + 1) }],
+    ['an overlong town', { town: 't'.repeat(TOWN_MAX + 1) }],
+    ['a name that is only spaces', { name: '     ' }],
     ['a new slug', { slug: 'elsewhere' }],
     ['not an object', ['Hall']],
   ])('%s is a 400 with a sentence, and nothing changes', async (_name, body) => {
@@ -95,6 +115,9 @@ describe('a new venue and its first manager', () => {
     const screen = await (await people.as.admin.fetch(`/venues/${venue.slug}/members`)).text();
     expect(screen).toContain('data-testid="no-manager"');
     expect(screen).toMatch(/<option value="manager" selected/);
+    // …and the way to its name and town, which the admin may change before anyone is in.
+    expect(screen).toContain(`href="/venues/${venue.slug}/settings"`);
+    expect((await people.as.admin.fetch(`/venues/${venue.slug}/settings`)).status).toBe(200);
     const invited = await people.as.admin.sendJson('POST', `/api/venues/${venue.slug}/invitations`, { email: 'first-manager@throwline.test', role: 'manager' });
     expect(invited.status).toBe(201);
     // The admin can rename it too, before anyone else is in.
