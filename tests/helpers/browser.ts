@@ -13,12 +13,14 @@ export interface Browser {
 }
 
 /** Debian's Chromium, headless, in a fresh profile, with its background chatter switched off. */
-export async function launchBrowser(options: { viewport?: { width: number; height: number }; offline?: boolean } = {}): Promise<Browser> {
+/** `touch` makes a phone of it: a touch screen, so tests can `tap()` as a thumb would. */
+export async function launchBrowser(options: { viewport?: { width: number; height: number }; offline?: boolean; touch?: boolean } = {}): Promise<Browser> {
   const profile = mkdtempSync(join(TMP_ROOT, 'chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
     headless: true,
     viewport: options.viewport ?? { width: 1280, height: 900 },
+    ...(options.touch ? { hasTouch: true } : {}),
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
   const requests: string[] = [];
