@@ -7,6 +7,7 @@ import tailwindcss from '@tailwindcss/vite';
 import auth from 'auth-astro';
 import { CSP_DIRECTIVES, SCRIPT_SOURCES, STYLE_SOURCES } from './src/server/security-policy.mjs';
 import { precompress } from './src/cli/precompress.mjs';
+import { searchWorkerBuild } from './src/cli/search-worker-build.mjs';
 
 export default defineConfig({
   output: 'server',
@@ -15,7 +16,7 @@ export default defineConfig({
   // Middleware mode: src/cli/serve.mjs puts static files, compression and the security headers
   // in front of it.
   adapter: node({ mode: 'middleware' }),
-  integrations: [react(), mdx(), auth({ configFile: './src/auth.config.ts', injectEndpoints: false }), precompress()],
+  integrations: [react(), mdx(), auth({ configFile: './src/auth.config.ts', injectEndpoints: false }), precompress(), searchWorkerBuild()],
   // The node adapter ignores the Host header unless it matches allowedDomains, and the URL's
   // origin then reads "localhost". The server is meant to run behind whatever name the venue
   // gives it, so any host is accepted here. Astro's own origin check covers only form posts and

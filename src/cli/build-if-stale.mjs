@@ -5,6 +5,8 @@ import { run } from './ensure-install.mjs';
 const INPUTS = ['src', 'public', 'content', 'astro.config.mjs', 'package-lock.json', 'tsconfig.json'];
 export const BUILD_DIR = process.env.THROWLINE_BUILD_DIR ?? 'dist';
 export const SERVER_ENTRY = `${BUILD_DIR}/server/entry.mjs`;
+/** The search thread's file, bundled beside the entry (src/cli/search-worker-build.mjs). */
+export const SEARCH_WORKER_FILE = 'search-worker.mjs';
 /** What serves the build: `npm start`, the tests and the benchmark all start this file (static files,
  * compression, security headers on every response, the trusted client address, then Astro). */
 export const SERVE_SCRIPT = 'src/cli/serve.mjs';

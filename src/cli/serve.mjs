@@ -16,9 +16,9 @@
 import { spawnSync } from 'node:child_process';
 import cluster from 'node:cluster';
 import { availableParallelism } from 'node:os';
-import { resolve } from 'node:path';
+import { dirname, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { BUILD_DIR, SERVER_ENTRY } from './build-if-stale.mjs';
+import { BUILD_DIR, SEARCH_WORKER_FILE, SERVER_ENTRY } from './build-if-stale.mjs';
 import { acceptedWithoutBrotli } from './accept-encoding.mjs';
 import { anonymousPageCache } from './anonymous-page-cache.mjs';
 import { clientAddressFor, parseTrustedProxies } from './client-address.mjs';
@@ -44,6 +44,8 @@ export function workerCount(value = process.env.WEB_CONCURRENCY) {
 const TEXT_TYPE = /^(text\/|application\/(json|javascript|xml|manifest\+json|problem\+json)|image\/svg\+xml)/i;
 
 async function serveOneProcess() {
+  // The search thread's own file, built beside the server entry (src/cli/search-worker-build.mjs).
+  process.env.THROWLINE_SEARCH_WORKER_FILE = resolve(dirname(SERVER_ENTRY), SEARCH_WORKER_FILE);
   const [{ default: polka }, { default: sirv }, { default: compression }, { handler }] = await Promise.all([
     import('polka'),
     import('sirv'),

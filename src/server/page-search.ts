@@ -1,23 +1,11 @@
 import { sql } from 'drizzle-orm';
-import { snippetHtml, snippetParts } from '~/lib/doc/marked-snippet';
 import { toSearchQuery } from '~/lib/doc/search-query';
-import { markAll, markedSnippet } from '~/lib/search/mark-matches';
+import type { SearchResult } from '~/lib/search/search-hits';
 import { readableVenueCondition } from './guard';
-import { readOffLoop } from './search-reader';
+import { searchOffLoop } from './search-reader';
 import type { SessionUser } from './session';
 
-interface HitRow {
-  /** 0 when every match was ranked; else the smallest index rowid that was (see RANKED_MATCHES_MAX). */
-  rankFloor: number;
-  venueSlug: string;
-  venueName: string;
-  pageSlug: string;
-  pageTitle: string;
-  sectionSlug: string;
-  sectionTitle: string;
-  updatedAt: number;
-  body: string | null;
-}
+export type { SearchHit, SearchResult } from '~/lib/search/search-hits';
 
 /** Most hits one results page shows; suggestions ask for fewer. */
 export const SEARCH_PAGE_LIMIT = 20;
@@ -58,9 +46,11 @@ export async function searchPages(user: SessionUser, q: string, limit = 20, offs
       WHERE f.pages_fts MATCH ${query.match} AND ${readableP2}
       ORDER BY f.rowid DESC LIMIT 1 OFFSET ${RANKED_MATCHES_MAX - 1}), 0)`;
   // ORDER BY rank with the ranking given through `rank MATCH` lets FTS5 hand rows over best
-  // first, so the joins and the access filter run only until the page is full. The query runs
-  // off the event loop: a broad one must not hold up everyone else's requests.
-  const rows = await readOffLoop<HitRow>(sql`
+  // first, so the joins and the access filter run only until the page is full. The query and the
+  // marking of its hits run off the event loop: a broad one must not hold up everyone else's
+  // requests. The rankFloor column is 0 when every match was ranked (see RANKED_MATCHES_MAX).
+  return searchOffLoop(
+    sql`
     SELECT v.slug AS venueSlug, v.name AS venueName, p.slug AS pageSlug, p.title AS pageTitle,
            s.slug AS sectionSlug, s.title AS sectionTitle, p.updated_at AS updatedAt,
            substr(r.plain_text, 1, ${SNIPPET_SOURCE_CHARS}) AS body, ${rankFloor} AS rankFloor
@@ -72,29 +62,7 @@ export async function searchPages(user: SessionUser, q: string, limit = 20, offs
     LEFT JOIN revisions r ON r.page_id = p.id AND r.number = p.current_revision
     WHERE pages_fts MATCH ${query.match} AND pages_fts.rank MATCH ${RANKING} AND ${readable} AND pages_fts.rowid >= ${rankFloor}
     ORDER BY pages_fts.rank
-    LIMIT ${limit} OFFSET ${Math.min(Math.max(0, offset), SEARCH_MAX_OFFSET)}`);
-  const hits = rows.map((r) => hitOf(r, query));
-  return { hits, recentOnly: rows.some((r) => Number(r.rankFloor) > 0) };
-}
-
-function hitOf(r: HitRow, query: NonNullable<ReturnType<typeof toSearchQuery>>) {
-  const markedBody = markedSnippet(r.body ?? '', query);
-  return {
-    venue: { slug: r.venueSlug, name: r.venueName },
-    page: { slug: r.pageSlug, title: r.pageTitle },
-    section: { slug: r.sectionSlug, title: r.sectionTitle },
-    url: `/venues/${r.venueSlug}/${r.pageSlug}`,
-    updatedAt: new Date(Number(r.updatedAt)),
-    titleParts: snippetParts(markAll(r.pageTitle, query)),
-    snippet: snippetHtml(markedBody),
-    snippetParts: snippetParts(markedBody),
-  };
-}
-
-export type SearchHit = ReturnType<typeof hitOf>;
-
-export interface SearchResult {
-  hits: SearchHit[];
-  /** True when the query matched more than RANKED_MATCHES_MAX pages and only the newest were ranked. */
-  recentOnly: boolean;
+    LIMIT ${limit} OFFSET ${Math.min(Math.max(0, offset), SEARCH_MAX_OFFSET)}`,
+    query,
+  );
 }

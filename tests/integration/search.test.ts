@@ -205,7 +205,28 @@ describe('GET /search, the results page', () => {
   });
 });
 
+describe('words every object answers to', () => {
+  // A lookup table built as an object literal once answered "constructor" with a function, and
+  // saving a page with the word in it failed while indexing.
+  it('a page about the constructor of a truss, with toString and __proto__ in it, saves and is found', async () => {
+    const made = await createTestPage(as.engineer, mainVenue, 'Truss constructor notes', doc(para('The constructor signed 5 valueOf 5constructor; toString and __proto__ are plain words.')));
+    expect(made.page.slug).toBeTruthy();
+    for (const q of ['constructor', 'valueof', 'tostring', 'proto']) {
+      const { status, hits } = await search(as.engineer, q);
+      expect(status).toBe(200);
+      expect(hits.map((h) => h.page.title)).toContain('Truss constructor notes');
+    }
+    const { hits } = await search(as.engineer, 'constructor');
+    expect(hits.find((h) => h.page.title === 'Truss constructor notes')!.snippetParts.filter((p) => p.match).map((p) => p.text)).toEqual(['constructor']);
+  });
+});
+
 describe('the search thread', () => {
+  it('does the marking too: the built server never falls back to the event loop', async () => {
+    expect((await search(as.engineer, 'quokkaphone')).hits.length).toBeGreaterThan(0);
+    expect(server.output()).not.toContain('search runs on the event loop');
+  });
+
   // Linux only: /proc names each thread and its nice value (field 19 of its stat line).
   const linux = process.platform === 'linux';
   it.runIf(linux)('runs at the lowest CPU priority, so searching never outruns the other requests', async () => {

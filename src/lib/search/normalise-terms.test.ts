@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { foldWord, indexText, queryTerms, termGroups } from './normalise-terms';
+import { foldWord, indexText, queryTerms, TERM_ALIASES, termGroups } from './normalise-terms';
 
 /** What FTS5's unicode61 tokenizer (remove_diacritics 2) makes of a string, closely enough for these texts. */
 function ftsTokens(text: string): string[] {
@@ -136,5 +136,43 @@ describe('indexText', () => {
 
   it('turns control characters (the snippet markers) into spaces', () => {
     expect(indexText('a\u0002b\u0003c')).not.toMatch(/\p{Cc}/u);
+  });
+});
+
+describe('the ASCII shortcut in foldWord', () => {
+  // The full fold, as the shortcut must equal it: NFKD, marks dropped, lower case, NFKC
+  // (the reading of FTS5's unicode61 tokenizer with remove_diacritics 2).
+  const fullFold = (raw: string) => raw.normalize('NFKD').replace(/\p{M}/gu, '').toLowerCase().normalize('NFKC');
+
+  it('gives the full fold for every ASCII character', () => {
+    for (let c = 0; c < 128; c++) {
+      const ch = String.fromCharCode(c);
+      // An alias only ever maps a whole word; none is one character of ASCII.
+      expect(foldWord(ch)).toBe(fullFold(ch));
+    }
+  });
+
+  it('gives the full fold, then the alias, for any word (ASCII or not)', () => {
+    fc.assert(
+      fc.property(fc.oneof(fc.string({ unit: 'binary-ascii', maxLength: 12 }), fc.constantFrom('Ohms', 'METRES', 'Hertz', 'ΩΩ', 'Ωhm', 'constructor', '__proto__', 'toString'), fc.string({ maxLength: 8 })), (raw) => {
+        const folded = fullFold(raw);
+        expect(foldWord(raw)).toBe(TERM_ALIASES.get(folded) ?? folded);
+      }),
+      { numRuns: 3000 },
+    );
+  });
+});
+
+describe('words that name things on an object', () => {
+  // A lookup table written as an object literal answers "constructor" with a function; page text
+  // holds any word, and indexing it must not break.
+  it.each(['constructor', 'Constructor', '__proto__', 'toString', 'hasOwnProperty', 'valueOf'])('%s is an ordinary word, alone, after a number and glued to one', (w) => {
+    expect(foldWord(w)).toBe(w.toLowerCase());
+    // "_" is not a word character, so "__proto__" is read as the word "proto".
+    expect(queryTerms(w)).toEqual([w.replace(/_/g, '').toLowerCase()]);
+    const text = `the ${w} 5 ${w} 5${w} of it`;
+    expect(indexText(text)).toContain(w);
+    expect(indexText(text)).not.toMatch(/function|native code|\[object/);
+    expect(finds(w, text)).toBe(true);
   });
 });
