@@ -1,5 +1,5 @@
 import { MATCH_CLOSE, MATCH_OPEN } from '~/lib/doc/marked-snippet';
-import { groupTerms, termGroups, wordTerms, type TermGroup } from './normalise-terms';
+import { groupTerms, termGroups, wordTerms, type TermGroup, type Word } from './normalise-terms';
 
 export interface MatchQuery {
   terms: string[];
@@ -12,17 +12,35 @@ interface Span {
   end: number;
 }
 
-function matcher(q: MatchQuery): (term: string) => boolean {
+interface Matcher {
+  /** The term is one the query looks for. */
+  term: (t: string) => boolean;
+  /** The word, read on its own, answers to one of the query's terms. */
+  word: (w: Word) => boolean;
+}
+
+function matcher(q: MatchQuery): Matcher {
   const whole = new Set(q.terms);
   const prefix = q.prefixLast ? q.terms.at(-1) : undefined;
-  return (t) => whole.has(t) || (prefix !== undefined && t.startsWith(prefix));
+  const term = (t: string) => whole.has(t) || (prefix !== undefined && t.startsWith(prefix));
+  // A page repeats its words, and a word's terms depend only on how it reads (term and plain
+  // token): each spelling is worked out once per query, not once per occurrence.
+  const seen = new Map<string, boolean>();
+  const word = (w: Word) => {
+    const key = `${w.term}\u0000${w.plain}`;
+    let hit = seen.get(key);
+    if (hit === undefined) seen.set(key, (hit = wordTerms(w).some(term)));
+    return hit;
+  };
+  return { term, word };
 }
 
 /** The parts of a group a query hits: the whole group when a joined spelling matches, else its words. */
-function hitsIn(text: string, g: TermGroup, hit: (t: string) => boolean): Span[] {
-  const words = g.words.filter((w) => wordTerms(w).some(hit));
+function hitsIn(text: string, g: TermGroup, hit: Matcher): Span[] {
+  const words = g.words.filter(hit.word);
   if (words.length) return words.map((w) => ({ start: w.start, end: w.end }));
-  if (!groupTerms(g).some(hit)) return [];
+  // A group of one word answers to exactly that word's terms, just asked.
+  if (g.words.length === 1 || !groupTerms(g).some(hit.term)) return [];
   // The shortest run of words that holds the hit: "98 dB(A)" searched as "dba" marks "dB(A)".
   for (let len = 2; len < g.words.length; len++) {
     for (let i = 0; i + len <= g.words.length; i++) {
@@ -30,7 +48,7 @@ function hitsIn(text: string, g: TermGroup, hit: (t: string) => boolean): Span[]
       const last = g.words[i + len - 1].end;
       const end = text[last] === ')' ? last + 1 : last;
       const [run] = termGroups(text.slice(start, end));
-      if (run && run.words.length === len && groupTerms(run).some(hit)) return [{ start, end }];
+      if (run && run.words.length === len && groupTerms(run).some(hit.term)) return [{ start, end }];
     }
   }
   return [{ start: g.start, end: g.end }];

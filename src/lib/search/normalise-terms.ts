@@ -24,8 +24,8 @@ export interface TermGroup {
   words: Word[];
   /** The one spelling a query uses for this group: its words joined, units in their short form. */
   joined: string;
-  /** Every term the index holds for this group beside the words themselves. */
-  variants: string[];
+  /** Every term the index holds for this group beside the words themselves (worked out on first use). */
+  readonly variants: string[];
 }
 
 /**
@@ -142,10 +142,13 @@ function joinBetween(text: string, a: Word, b: Word): Join {
   if (between.length === 1 && HYPHENS.has(between)) return 'hyphen';
   if (between === '.' && DIGITS.test(a.term) && DIGITS.test(b.term)) return 'decimal';
   if (between === '(' && text[b.end] === ')' && [...b.term].length <= 4) return 'bracket';
-  if (/^[ \t\u00a0\u202f]{1,2}$/u.test(between)) {
-    const endsInNumber = /\p{N}$/u.test(a.term);
+  // A unit follows a number or a decibel; every other pair of words (most of them) stops here.
+  if (between.length > 2) return null;
+  const endsInNumber = /\p{N}$/u.test(a.term);
+  const afterDecibel = a.term === 'db' || a.term.endsWith('db');
+  if ((endsInNumber || afterDecibel) && /^[ \t\u00a0\u202f]{1,2}$/u.test(between)) {
     if (endsInNumber && isUnitAfterNumber(b.term)) return 'unit';
-    if ((a.term === 'db' || a.term.endsWith('db')) && DB_SUFFIXES.has(b.term)) return 'unit';
+    if (afterDecibel && DB_SUFFIXES.has(b.term)) return 'unit';
   }
   return null;
 }
@@ -167,10 +170,35 @@ function joinedRun(ws: Word[], joins: Join[], from: number, to: number): string 
   return joined;
 }
 
+/** A group whose variants are worked out when first asked for: marking a snippet asks only of groups its words do not decide. */
+class Group implements TermGroup {
+  readonly start: number;
+  readonly end: number;
+  readonly joined: string;
+  private known: string[] | undefined;
+
+  constructor(
+    readonly words: Word[],
+    private readonly joins: Join[],
+  ) {
+    const last = words.length - 1;
+    this.start = words[0].start;
+    this.end = words[last].end + (joins.at(-1) === 'bracket' ? 1 : 0);
+    this.joined = joinedRun(words, joins, 0, last);
+  }
+
+  get variants(): string[] {
+    return (this.known ??= variantsOf(this.words, this.joins));
+  }
+}
+
 function groupOf(ws: Word[], joins: Join[]): TermGroup {
+  return new Group(ws, joins);
+}
+
+function variantsOf(ws: Word[], joins: Join[]): string[] {
   const last = ws.length - 1;
-  const joined = joinedRun(ws, joins, 0, last);
-  const variants = new Set<string>([joined]);
+  const variants = new Set<string>([joinedRun(ws, joins, 0, last)]);
   for (let from = 0; from <= last; from++) {
     for (let to = from; to <= last; to++) {
       // A run never cuts a decimal: "2.5 mm" holds "2.5mm", not "5mm".
@@ -186,8 +214,7 @@ function groupOf(ws: Word[], joins: Join[]): TermGroup {
     if (unit.startsWith('db') && DB_SUFFIXES.has(unit.slice(2))) variants.add('db');
   }
   for (const w of ws) variants.delete(w.plain);
-  const end = ws[last].end + (joins.at(-1) === 'bracket' ? 1 : 0);
-  return { start: ws[0].start, end, words: ws, joined, variants: [...variants] };
+  return [...variants];
 }
 
 /** The text cut into groups of words the trade writes as one thing. */
