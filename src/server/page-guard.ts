@@ -3,6 +3,7 @@ import type { Action } from '~/lib/permissions';
 import { guardVenue, requirePermission, requireUser, type VenueContext } from './guard';
 import { noteVisit } from './members';
 import { HttpError } from './http';
+import { loadPageFor, type PageLoader, type PageRow } from './pages';
 import type { SessionUser } from './session';
 
 export type PageGuardResult =
@@ -52,18 +53,19 @@ export function guardInstancePage(Astro: AstroGlobal, action: Action): { ok: tru
 }
 
 /**
- * guardVenuePage, then loads one page of that venue with `load`; a missing page is the 404 page.
+ * guardVenuePage, then loads one page of that venue with `load`; a missing page, or an archived
+ * one for someone who may not restore it (loadPageFor), is the 404 page.
  * Used by the read, edit and history views so each states only what it loads.
  */
-export async function guardPageView<T>(
+export async function guardPageView<T extends { page: PageRow }>(
   Astro: AstroGlobal,
   action: Action,
-  load: (venueId: string, pageSlug: string | undefined) => Promise<T>,
+  load: PageLoader<T>,
 ): Promise<{ ok: true; ctx: VenueContext & { user: SessionUser }; loaded: T } | { ok: false; response: Response | Promise<Response> }> {
   const guard = await guardVenuePage(Astro, action);
   if (!guard.ok) return guard;
   try {
-    return { ok: true, ctx: guard.ctx, loaded: await load(guard.ctx.venue.id, Astro.params.page) };
+    return { ok: true, ctx: guard.ctx, loaded: await loadPageFor(guard.ctx, Astro.params.page, load) };
   } catch (err) {
     return { ok: false, response: errorPageResponse(Astro, err) };
   }

@@ -188,17 +188,38 @@ export async function createPage(venueId: string, input: PageCreate, actor: Sess
   });
 }
 
-/** An archived page is out of the book: for anyone who may not restore it, it does not exist. */
-export function hideArchived(page: { archivedAt: Date | null }, user: SessionUser, access: VenueAccess): void {
-  if (page.archivedAt && !can(user, 'page.edit', access)) throw new HttpError(404, PAGE_NOT_FOUND);
+/** Loads one page of a venue for the routes about one page; 404 when the slug is not one of its pages. */
+export type PageLoader<T extends { page: PageRow }> = (venueId: string, pageSlug: string | undefined) => Promise<T>;
+
+/** Just the page row (history, one revision, a save). */
+export const loadPageRow: PageLoader<{ page: PageRow }> = async (venueId, pageSlug) => ({ page: await findPage(venueId, pageSlug) });
+
+/**
+ * `load`, then the rule for archived pages: out of the book, so for anyone who may not restore
+ * one it does not exist. The one place the rule is applied: guardPage (JSON routes) and
+ * guardPageView (screens) both load through here.
+ */
+export async function loadPageFor<T extends { page: PageRow }>(
+  reader: { venue: { id: string }; user: SessionUser; access: VenueAccess },
+  pageSlug: string | undefined,
+  load: PageLoader<T>,
+): Promise<T> {
+  const loaded = await load(reader.venue.id, pageSlug);
+  if (loaded.page.archivedAt && !can(reader.user, 'page.edit', reader.access)) throw new HttpError(404, PAGE_NOT_FOUND);
+  return loaded;
 }
 
-/** 401 → 404 (venue, then page) → 403 for routes about one page. */
-export async function guardPage(user: RequestPrincipal, venueSlug: string | undefined, pageSlug: string | undefined, action: Action) {
+/** 401 → 404 (venue, then page) → 403 for routes about one page; `load` says what else to read with it. */
+export async function guardPage<T extends { page: PageRow } = { page: PageRow }>(
+  user: RequestPrincipal,
+  venueSlug: string | undefined,
+  pageSlug: string | undefined,
+  action: Action,
+  load: PageLoader<T> = loadPageRow as unknown as PageLoader<T>,
+) {
   const signedIn = requireUser(user);
   const ctx = await loadVenue(signedIn, venueSlug);
-  const page = await findPage(ctx.venue.id, pageSlug);
-  hideArchived(page, signedIn, ctx.access);
+  const loaded = await loadPageFor({ ...ctx, user: signedIn }, pageSlug, load);
   requirePermission(signedIn, action, ctx.access);
-  return { ...ctx, user: signedIn, page };
+  return { ...ctx, user: signedIn, ...loaded };
 }

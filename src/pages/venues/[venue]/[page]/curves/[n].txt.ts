@@ -2,16 +2,13 @@ import type { APIRoute } from 'astro';
 import { blockCurveText } from '~/lib/doc/blocks/block-curve-text';
 import { processorBlocksInOrder } from '~/lib/doc/blocks/block-order';
 import { contentDisposition } from '~/server/files/content-disposition';
-import { guardVenue } from '~/server/guard';
 import { handle, HttpError } from '~/server/http';
-import { hideArchived, loadPageWithCurrent } from '~/server/pages';
+import { guardPage, loadPageWithCurrent } from '~/server/pages';
 
 /** The computed curve of the n-th processor block of a page's current revision, as text columns. */
 export const GET: APIRoute = (context) =>
   handle(async () => {
-    const { venue, access, user } = await guardVenue(context.locals.user, context.params.venue, 'venue.read');
-    const { page, revision } = await loadPageWithCurrent(venue.id, context.params.page);
-    hideArchived(page, user, access);
+    const { venue, page, revision } = await guardPage(context.locals.user, context.params.venue, context.params.page, 'venue.read', loadPageWithCurrent);
     const n = Number(context.params.n);
     const blocks = revision ? processorBlocksInOrder(revision.doc) : [];
     const node = Number.isInteger(n) && n >= 1 ? blocks[n - 1] : undefined;

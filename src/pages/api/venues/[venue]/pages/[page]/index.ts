@@ -1,17 +1,14 @@
 import type { APIRoute } from 'astro';
 import type { PageAnswer, PageSaved } from '~/lib/api-types';
 import { PageSaveSchema } from '~/lib/schemas/page';
-import { guardVenue } from '~/server/guard';
 import { handle, idempotencyKey, json, parseWith, readJsonBody } from '~/server/http';
-import { guardPage, hideArchived, loadPageWithCurrent, pageJson } from '~/server/pages';
+import { guardPage, loadPageWithCurrent, pageJson } from '~/server/pages';
 import { authorJson, revisionJson } from '~/server/revision-json';
 import { saveRevision } from '~/server/revisions';
 
 export const GET: APIRoute = ({ locals, params }) =>
   handle(async () => {
-    const { venue, access, user } = await guardVenue(locals.principal, params.venue, 'venue.read');
-    const { page, section, revision } = await loadPageWithCurrent(venue.id, params.page);
-    hideArchived(page, user, access);
+    const { page, section, revision } = await guardPage(locals.principal, params.venue, params.page, 'venue.read', loadPageWithCurrent);
     return json<PageAnswer<Date>>({
       page: pageJson(page, section),
       revision: revision ? revisionJson(revision, authorJson(revision.authorId, revision.authorName), revision.doc) : null,
