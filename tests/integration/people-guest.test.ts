@@ -149,6 +149,13 @@ describe('guest passes', () => {
     for (const path of [`/api/venues/${people.venue}/pages`, `/api/venues/${people.venue}/files`, '/api/search?q=stage', `/api/venues/${people.venue}/members`, `/api/venues/${people.venue}/passes`, '/api/venues']) {
       expect((await fetch(`${server.url}${path}`, { headers: bearer })).status, path).toBe(404);
     }
+    // Nor a page's own routes, even for a page on the sheet, nor a block's computed curve that a
+    // viewer can download.
+    const curve = `/venues/${people.venue}/system-processing/curves/1.txt`;
+    expect((await people.as.viewer.fetch(curve)).status).toBe(200);
+    for (const path of [curve, `/api/venues/${people.venue}/pages/rigging-points`, `/api/venues/${people.venue}/pages/rigging-points/revisions`]) {
+      expect((await fetch(`${server.url}${path}`, { headers: bearer })).status, path).toBe(404);
+    }
     // The pass does not turn into a session anywhere else.
     expect((await fetch(`${server.url}/files/${onSheet.id}/display`, { headers: bearer })).status).toBe(404);
     expect((await fetch(`${server.url}/advance/${pass.token}/anything-else`)).status).toBe(404);

@@ -8,7 +8,7 @@ import { guardPage, loadPageWithCurrent } from '~/server/pages';
 /** The computed curve of the n-th processor block of a page's current revision, as text columns. */
 export const GET: APIRoute = (context) =>
   handle(async () => {
-    const { venue, page, revision } = await guardPage(context.locals.user, context.params.venue, context.params.page, 'venue.read', loadPageWithCurrent);
+    const { venue, page, revision } = await guardPage(context.locals.principal, context.params.venue, context.params.page, 'venue.read', loadPageWithCurrent);
     const n = Number(context.params.n);
     const blocks = revision ? processorBlocksInOrder(revision.doc) : [];
     const node = Number.isInteger(n) && n >= 1 ? blocks[n - 1] : undefined;
