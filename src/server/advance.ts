@@ -77,7 +77,9 @@ export type SheetPage = Awaited<ReturnType<typeof loadAdvanceSheet>>[number];
 /** Whether a file of this venue is used by a page on its advance sheet (what a guest may fetch). */
 export async function isAdvanceFile(venueId: string, fileId: string): Promise<boolean> {
   const rows = await advanceRows(venueId);
-  return rows.some((r) => r.doc !== null && fileIdsInDoc(JSON.parse(r.doc) as PmNode).has(fileId));
+  // Each photo of the sheet a guest loads asks this; a doc whose text lacks the id cannot use the
+  // file, so only the others are parsed (and the parse, not the substring, decides).
+  return rows.some((r) => r.doc !== null && r.doc.includes(fileId) && fileIdsInDoc(JSON.parse(r.doc) as PmNode).has(fileId));
 }
 
 /** Every live page with whether it is on the sheet, for the manager's selection screen. */
