@@ -47,3 +47,27 @@ describe.each(viewports)('the demo manager on $name', ({ viewport }) => {
     expect(foreignRequests(browser.requests)).toEqual([]);
   });
 });
+
+describe('signing out everywhere', () => {
+  it('the button on the account screen ends the session on another device too', async () => {
+    const laptop = await launchBrowser({ viewport: { width: 1280, height: 900 } });
+    const phone = await launchBrowser({ viewport: { width: 390, height: 844 }, touch: true });
+    try {
+      const foh = await laptop.context.newPage();
+      await signInThroughPage(foh, server.url, DEMO.viewer);
+      const mine = await phone.context.newPage();
+      await signInThroughPage(mine, server.url, DEMO.viewer);
+      await mine.goto(`${server.url}/account`);
+      const button = mine.getByTestId('signout-everywhere');
+      expect((await button.boundingBox())!.height).toBeGreaterThanOrEqual(44);
+      await Promise.all([mine.waitForURL(/\/signin\?signedout=1$/), button.tap()]);
+      // The laptop left signed in at FOH is signed out on its next request.
+      await foh.goto(`${server.url}/venues`);
+      await foh.waitForURL(/\/signin/);
+      expect(foreignRequests([...laptop.requests, ...phone.requests])).toEqual([]);
+    } finally {
+      await laptop.close();
+      await phone.close();
+    }
+  });
+});

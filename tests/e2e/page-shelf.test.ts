@@ -37,8 +37,8 @@ describe('moving, archiving and restoring a page on a phone', () => {
   it('moves the page to the power section', async () => {
     await page.goto(`${server.url}/venues/${venue}/${slug}`);
     await page.getByText('Move or archive this page').tap();
-    // Every control of the move and archive box is thumb-sized.
-    for (const control of [page.getByText('Move or archive this page'), page.getByTestId('move-section'), page.getByTestId('move-page'), page.getByTestId('archive-page')]) {
+    // Every control of the read view's bar and of the move and archive box is thumb-sized.
+    for (const control of [page.getByRole('link', { name: 'History', exact: true }), page.getByTestId('edit-page'), page.getByText('Move or archive this page'), page.getByTestId('move-section'), page.getByTestId('move-page'), page.getByTestId('archive-page')]) {
       expect((await control.boundingBox())!.height).toBeGreaterThanOrEqual(44);
     }
     await expect(page.getByLabel('Section').count()).resolves.toBe(1);
