@@ -28,6 +28,19 @@ import { hstsFromEnv, securityHeaders } from '../server/security-policy.mjs';
 // first loaded, so anything else here would serve React's development SSR (several times slower).
 process.env.NODE_ENV = 'production';
 
+/**
+ * How glibc's malloc behaves in the workers (mallopt(3); a setting already in the environment
+ * wins). Photos are decoded by libvips in tens of MB at a time, and by default glibc hands little
+ * of that back: each thread gets its own arena, and after a large block is freed the size above
+ * which blocks are mmap'ed (and so returned when freed) rises to that block's size, so the next
+ * photo's buffers come from the heap and stay. Two arenas and a fixed 128 KiB threshold keep the
+ * RSS after uploads near idle (DEVELOPERS.md, "Memory"; `npm run bench` measures it).
+ */
+const GLIBC_MALLOC = {
+  MALLOC_ARENA_MAX: process.env.MALLOC_ARENA_MAX ?? '2',
+  MALLOC_MMAP_THRESHOLD_: process.env.MALLOC_MMAP_THRESHOLD_ ?? '131072',
+};
+
 /** WEB_CONCURRENCY: a number of processes, or "auto" for one per CPU core. Default 1. */
 export function workerCount(value = process.env.WEB_CONCURRENCY) {
   if (value === undefined || value === '') return 1;
@@ -126,7 +139,7 @@ function superviseWorkers(count) {
   const port = process.env.PORT || 4321;
   let listening = 0;
   // Workers see the resolved count ("auto" becomes a number): the storage sweep depends on it.
-  const fork = () => cluster.fork({ MALLOC_ARENA_MAX: process.env.MALLOC_ARENA_MAX ?? '2', WEB_CONCURRENCY: String(count) });
+  const fork = () => cluster.fork({ ...GLIBC_MALLOC, WEB_CONCURRENCY: String(count) });
   cluster.on('listening', () => {
     if (++listening === count) console.log(`Throwline is listening on http://${host}:${port}/${count > 1 ? ` (${count} processes)` : ''}`);
   });
@@ -150,9 +163,6 @@ function superviseWorkers(count) {
     });
     if (migrated.status !== 0) process.exit(migrated.status ?? 1);
   }
-  // glibc gives each thread that allocates its own arena and rarely hands freed pages back:
-  // after a few photo uploads (libvips works on several threads) RSS stayed ~300 MB above idle.
-  // Two arenas keep it close to idle at no measurable cost to throughput.
   for (let i = 0; i < count; i++) fork();
   for (const signal of ['SIGINT', 'SIGTERM']) {
     process.once(signal, () => {
