@@ -63,6 +63,47 @@ describe('a venue of many pages', () => {
     expect(text).not.toContain('<script>x</script>');
   });
 
+  it('a venue whose sections all fit their preview lists every live page, by section and title, as SQL sorts them', async () => {
+    const { venues } = (await (await manager.fetch('/api/venues')).json()) as { venues: { slug: string }[] };
+    const small = venues.find((v) => v.slug !== big)!.slug;
+    // Renamed after it was made, so its address sorts first and its title last.
+    const extra = await createTestPage(manager, small, 'Aaa first by address', doc(para('shelf test')), 'stage');
+    expect((await manager.sendJson('PUT', `/api/venues/${small}/pages/${extra.page.slug}`, { doc: doc(para('shelf test')), baseRevision: 1, title: 'Zzz last by title' })).status).toBe(200);
+    const gone = await createTestPage(manager, small, 'Aab archived one', doc(para('shelf test')), 'stage');
+    expect((await manager.sendJson('PUT', `/api/venues/${small}/pages/${gone.page.slug}/archived`, { archived: true })).status).toBe(200);
+    const db = createClient({ url: `file:${server.dbPath}` });
+    try {
+      const rows = (
+        await db.execute({
+          sql: `select s.slug as section, p.slug from sections s join venues v on v.id = s.venue_id
+                left join pages p on p.section_id = s.id and p.archived_at is null
+                where v.slug = ? order by s.position, s.title, p.title, p.slug`,
+          args: [small],
+        })
+      ).rows;
+      const expected = new Map<string, string[]>();
+      for (const r of rows) {
+        const list = expected.get(String(r.section)) ?? [];
+        if (r.slug !== null) list.push(String(r.slug));
+        expected.set(String(r.section), list);
+      }
+      expect(Math.max(...[...expected.values()].map((l) => l.length))).toBeLessThanOrEqual(50);
+      const text = withoutRecent(await html(manager, `/venues/${small}`));
+      const shown = new Map(
+        [...text.matchAll(/<section aria-labelledby="sec-([\w-]+)"[\s\S]*?<\/section>/g)].map((m) => [
+          m[1],
+          [...m[0].matchAll(new RegExp(`href="/venues/${small}/([\\w-]+)"`, 'g'))].map((l) => l[1]),
+        ]),
+      );
+      expect(shown).toEqual(expected);
+      expect(shown.get('stage')!.at(-1)).toBe(extra.page.slug);
+      expect([...shown.values()].flat()).not.toContain(gone.page.slug);
+      expect(text).not.toContain('data-testid="section-more"');
+    } finally {
+      db.close();
+    }
+  });
+
   it('a person who is not a member gets the 404, section or not', async () => {
     expect((await viewer.fetch(`/venues/${big}`)).status).toBe(404);
     expect((await viewer.fetch(`/venues/${big}?section=part-0`)).status).toBe(404);
