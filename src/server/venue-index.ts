@@ -53,16 +53,15 @@ export async function sectionPreviews(
   sectionIds: string[],
   counts: Map<string, { pages: number }>,
 ): Promise<Map<string, IndexPage[]>> {
+  const pagesIn = (sectionId: string) => counts.get(sectionId)?.pages ?? 0;
   const bySection = new Map<string, IndexPage[]>(sectionIds.map((id) => [id, []]));
-  const fits = sectionIds.every((id) => (counts.get(id)?.pages ?? 0) <= PREVIEW_PER_SECTION);
-  if (fits) {
+  if (sectionIds.every((id) => pagesIn(id) <= PREVIEW_PER_SECTION)) {
     venuePagesQuery ??= buildVenuePagesQuery(await getDb());
     for (const { sectionId, ...page } of await venuePagesQuery.all({ venueId })) bySection.get(sectionId)?.push(page);
     return bySection;
   }
   for (const sectionId of sectionIds) {
-    if ((counts.get(sectionId)?.pages ?? 0) === 0) continue;
-    bySection.set(sectionId, await sectionPagesAt(venueId, sectionId, 1, PREVIEW_PER_SECTION));
+    if (pagesIn(sectionId) > 0) bySection.set(sectionId, await sectionPagesAt(venueId, sectionId, 1, PREVIEW_PER_SECTION));
   }
   return bySection;
 }
@@ -78,7 +77,7 @@ function buildVenuePagesQuery(db: Db) {
     .prepare();
 }
 
-/** Built once: the venue home runs it for every section. */
+/** Built once: the venue home runs it for each section too big for the one-query path. */
 let sectionPagesQuery: ReturnType<typeof buildSectionPagesQuery> | undefined;
 
 function buildSectionPagesQuery(db: Db) {

@@ -54,7 +54,7 @@ export async function listSections(venueId: string) {
   return sectionsQuery.all({ venueId });
 }
 
-/** Pages of a venue with their section, for the venue home and GET /api/venues/:venue/pages. */
+/** Live pages of a venue with their section, for GET /api/venues/:venue/pages and the files screen. */
 export async function listPages(venueId: string) {
   const db = await getDb();
   return db
